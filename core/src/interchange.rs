@@ -1,0 +1,153 @@
+//! Reads and writes an inspection as JSON (the interchange format of `docs/inspection-format.md`),
+//! refusing malformed files with the path of the bad field.
+
+use crate::model::{Inspection, FORMAT_NAME, FORMAT_VERSION};
+use std::collections::HashSet;
+use thiserror::Error;
+
+/// Files larger than this are refused before parsing (an inspection is tens of kilobytes).
+pub const MAX_FILE_BYTES: usize = 32 * 1024 * 1024;
+
+#[derive(Debug, Error, PartialEq)]
+pub enum InterchangeError {
+    #[error("the file is empty")]
+    Empty,
+    #[error("the file is {0} bytes; an inspection file is at most 32 MiB")]
+    TooLarge(usize),
+    #[error("the file is not UTF-8 text")]
+    NotText,
+    #[error("at {path}: {message}")]
+    Field { path: String, message: String },
+    #[error("not an inspection file (format is \"{0}\", expected \"undercroft-inspection\")")]
+    WrongFormat(String),
+    #[error("format version {0} is newer than this app reads ({FORMAT_VERSION}); update the app")]
+    TooNew(u32),
+    #[error("id \"{0}\" is used more than once")]
+    DuplicateId(String),
+}
+
+pub type Result<T> = std::result::Result<T, InterchangeError>;
+
+/// Parses and checks an inspection file.
+pub fn from_json_bytes(bytes: &[u8]) -> Result<Inspection> {
+    if bytes.iter().all(u8::is_ascii_whitespace) {
+        return Err(InterchangeError::Empty);
+    }
+    if bytes.len() > MAX_FILE_BYTES {
+        return Err(InterchangeError::TooLarge(bytes.len()));
+    }
+    let text = std::str::from_utf8(bytes).map_err(|_| InterchangeError::NotText)?;
+    from_json(text)
+}
+
+pub fn from_json(text: &str) -> Result<Inspection> {
+    let mut de = serde_json::Deserializer::from_str(text);
+    let inspection: Inspection = serde_path_to_error::deserialize(&mut de).map_err(|e| {
+        let path = e.path().to_string();
+        let inner = e.into_inner();
+        let message = if inner.is_eof() {
+            "the file ends too early (truncated?)".to_string()
+        } else {
+            inner.to_string()
+        };
+        InterchangeError::Field { path: if path == "." { "the top".into() } else { path }, message }
+    })?;
+    de.end().map_err(|e| InterchangeError::Field { path: "the end".into(), message: e.to_string() })?;
+    if inspection.format != FORMAT_NAME {
+        return Err(InterchangeError::WrongFormat(inspection.format));
+    }
+    if inspection.version > FORMAT_VERSION {
+        return Err(InterchangeError::TooNew(inspection.version));
+    }
+    check_ids(&inspection)?;
+    Ok(inspection)
+}
+
+/// Writes the inspection as pretty JSON.
+pub fn to_json(inspection: &Inspection) -> String {
+    serde_json::to_string_pretty(inspection).expect("the model always serializes")
+}
+
+fn check_ids(inspection: &Inspection) -> Result<()> {
+    let mut seen = HashSet::new();
+    let mut add = |id: &str| {
+        if seen.insert(id.to_string()) {
+            Ok(())
+        } else {
+            Err(InterchangeError::DuplicateId(id.to_string()))
+        }
+    };
+    for area in &inspection.areas {
+        add(&area.id)?;
+        for run in &area.runs {
+            add(&run.id)?;
+            run.observations.iter().try_for_each(|o| add(&o.id))?;
+            for joist in &run.joists {
+                add(&joist.id)?;
+                joist.observations.iter().try_for_each(|o| add(&o.id))?;
+            }
+        }
+        for member in &area.members {
+            add(&member.id)?;
+            member.observations.iter().try_for_each(|o| add(&o.id))?;
+        }
+    }
+    inspection.photos.iter().try_for_each(|p| add(&p.id))
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    const MINIMAL: &str = r#"{"format":"undercroft-inspection","version":1,"id":"i1","property":{"address":"1 Elm"},"date":"2026-12-01"}"#;
+
+    #[test]
+    fn minimal_file_reads() {
+        let i = from_json(MINIMAL).unwrap();
+        assert_eq!(i.code_edition, "IRC 2018");
+        assert_eq!(from_json(&to_json(&i)).unwrap(), i);
+    }
+
+    #[test]
+    fn bad_fields_name_their_path() {
+        let bad_span = MINIMAL.replace(
+            r#""date":"2026-12-01""#,
+            r#""date":"2026-12-01","areas":[{"id":"a","name":"Crawl","runs":[{"id":"r","label":"R","framing":{"clear_span":"13''7"}}]}]"#,
+        );
+        let err = from_json(&bad_span).unwrap_err();
+        let InterchangeError::Field { path, message } = &err else { panic!("{err}") };
+        assert_eq!(path, "areas[0].runs[0].framing.clear_span");
+        assert!(message.contains("13''7"), "{message}");
+
+        let bad_species = MINIMAL.replace(
+            r#""date":"2026-12-01""#,
+            r#""date":"2026-12-01","areas":[{"id":"a","name":"Crawl","members":[{"id":"m","label":"M","framing":{"species":"oak"}}]}]"#,
+        );
+        let err = from_json(&bad_species).unwrap_err().to_string();
+        assert!(err.starts_with("at areas[0].members[0].framing.species: unknown species \"oak\""), "{err}");
+    }
+
+    #[test]
+    fn garbage_and_edges() {
+        assert_eq!(from_json_bytes(b""), Err(InterchangeError::Empty));
+        assert_eq!(from_json_bytes(b"\xff\xfe"), Err(InterchangeError::NotText));
+        assert!(matches!(from_json_bytes(&MINIMAL.as_bytes()[..40]), Err(InterchangeError::Field { .. })));
+        assert!(matches!(from_json("[1,2]"), Err(InterchangeError::Field { .. })));
+        assert!(matches!(from_json(&format!("{MINIMAL} x")), Err(InterchangeError::Field { .. })));
+        let other = MINIMAL.replace("undercroft-inspection", "something-else");
+        assert!(matches!(from_json(&other), Err(InterchangeError::WrongFormat(_))));
+        let newer = MINIMAL.replace(r#""version":1"#, r#""version":9"#);
+        assert_eq!(from_json(&newer), Err(InterchangeError::TooNew(9)));
+        let dup = MINIMAL.replace(r#""date":"2026-12-01""#, r#""date":"2026-12-01","areas":[{"id":"a","name":"A"},{"id":"a","name":"B"}]"#);
+        assert_eq!(from_json(&dup), Err(InterchangeError::DuplicateId("a".into())));
+        let big = vec![b' '; MAX_FILE_BYTES + 1];
+        assert_eq!(from_json_bytes(&big), Err(InterchangeError::Empty));
+    }
+
+    #[test]
+    fn non_latin_text_survives() {
+        let text = MINIMAL.replace("1 Elm", "Nguyễn Văn 李 Zoë Ångström");
+        let i = from_json(&text).unwrap();
+        assert_eq!(i.property.address, "Nguyễn Văn 李 Zoë Ångström");
+    }
+}

@@ -1,0 +1,21 @@
+//! Undercroft's core: the inspection model, validation, the rules that turn measurements of wood
+//! floor framing into findings citing the governing limit, and the interchange format.
+
+pub mod engine;
+pub mod finding;
+pub mod geometry;
+pub mod interchange;
+pub mod lumber;
+pub mod mechanics;
+pub mod model;
+pub mod rules;
+mod serde_text;
+pub mod units;
+pub mod validate;
+
+pub use engine::{evaluate, Evaluation};
+pub use finding::{Finding, Status};
+pub use model::Inspection;
+
+/// The caution every output carries.
+pub const SCREENING_NOTICE: &str = "Screening tool, not an engineering evaluation. Findings compare field measurements with the prescriptive limits of the residential code edition named and with wood mechanics (NDS); local codes and amendments govern. Refer structural concerns to a licensed professional.";

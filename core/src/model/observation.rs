@@ -1,0 +1,146 @@
+//! What the inspector saw on a member: notches, holes, bearing, sag, moisture, damage, laps.
+
+use super::{BearingSupport, EndRestraint};
+use crate::units::Length;
+use serde::{Deserialize, Serialize};
+
+/// Which support a position is measured from: end A (the first support named) or end B.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum End {
+    #[default]
+    A,
+    B,
+}
+
+/// The edge of the member a notch is cut from. For a simple span under gravity load the
+/// bottom edge is the tension side.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Edge {
+    Top,
+    Bottom,
+}
+
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum DamageCause {
+    Decay,
+    Insects,
+    Fire,
+    Other,
+}
+
+/// One offset read from a string or laser line stretched between the bearings.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct SagReading {
+    /// Distance from the face of support A.
+    pub at: Length,
+    /// Gap between the line and the joist's bottom edge (or, with spacer blocks, the gap read
+    /// on the tape; see `spacer`).
+    pub offset: Length,
+}
+
+/// One observation with its id and the inspector's note.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct Observation {
+    pub id: String,
+    #[serde(flatten)]
+    pub kind: ObservationKind,
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub note: String,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(tag = "kind", rename_all = "kebab-case")]
+pub enum ObservationKind {
+    /// A notch cut from an edge.
+    Notch {
+        edge: Edge,
+        depth: Length,
+        length: Length,
+        /// The notch is at the member's end, over or at the bearing.
+        #[serde(default)]
+        at_end: bool,
+        /// Distance from the nearest support face to the near side of the notch (not needed
+        /// for a notch at the end).
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        from_support: Option<Length>,
+        #[serde(default)]
+        end: End,
+    },
+    /// A bored hole through the member.
+    Hole {
+        diameter: Length,
+        /// Distance from the nearest support face to the hole's centre.
+        from_support: Length,
+        #[serde(default)]
+        end: End,
+        /// Height of the hole's centre above the member's bottom edge.
+        center_above_bottom: Length,
+    },
+    /// Bearing at one end, where it differs from the run's or needs recording.
+    Bearing {
+        end: End,
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        length: Option<Length>,
+        on: BearingSupport,
+    },
+    /// Offsets read along a line between the bearings.
+    Sag {
+        readings: Vec<SagReading>,
+        /// Thickness of equal spacer blocks holding the line off the member at the bearings;
+        /// the sag is then the spacer less the gap read. None: readings are the sag itself.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        spacer: Option<Length>,
+    },
+    /// A moisture meter reading, percent moisture content.
+    Moisture {
+        percent: f64,
+        #[serde(default, skip_serializing_if = "String::is_empty")]
+        location: String,
+    },
+    /// Decay, insect or other damage, with the inspector's own words for how bad.
+    Damage {
+        cause: DamageCause,
+        #[serde(default)]
+        severity: String,
+        #[serde(default, skip_serializing_if = "String::is_empty")]
+        extent: String,
+    },
+    /// Joists from opposite sides lapped over a support.
+    Lap {
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        length: Option<Length>,
+        /// Number of 10d face nails seen.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        nails: Option<u32>,
+        /// Spliced with a connection of equal strength instead of lapped.
+        #[serde(default)]
+        spliced: bool,
+    },
+    /// End restraint at one end, where it differs from the run's.
+    Restraint { end: End, restraint: EndRestraint },
+    /// Any other cut into the member (a flange cut or sawn web, say).
+    Cut {
+        #[serde(default)]
+        description: String,
+    },
+}
+
+impl ObservationKind {
+    pub fn name(&self) -> &'static str {
+        match self {
+            ObservationKind::Notch { .. } => "notch",
+            ObservationKind::Hole { .. } => "bored hole",
+            ObservationKind::Bearing { .. } => "bearing",
+            ObservationKind::Sag { .. } => "sag readings",
+            ObservationKind::Moisture { .. } => "moisture reading",
+            ObservationKind::Damage { .. } => "damage",
+            ObservationKind::Lap { .. } => "lap",
+            ObservationKind::Restraint { .. } => "end restraint",
+            ObservationKind::Cut { .. } => "cut",
+        }
+    }
+}

@@ -1,0 +1,81 @@
+//! The rules: one module per provision, each with a stable id, a title, a citation and a
+//! pure check of one validated member. `RULES` lists them all and sets report order.
+
+mod bearing;
+mod bridging;
+mod engineered;
+mod end_restraint;
+mod joist_span;
+mod lap;
+mod moisture;
+mod notch;
+mod bored_hole;
+mod sag;
+mod shared;
+mod span_options;
+mod wood_damage;
+
+#[cfg(test)]
+pub(crate) mod testing;
+
+use crate::finding::{Finding, RuleInfo};
+use crate::validate::MemberContext;
+
+/// A rule: its identity and its check.
+pub struct Rule {
+    pub info: RuleInfo,
+    pub check: fn(&MemberContext) -> Vec<Finding>,
+}
+
+/// Every rule, in report order.
+pub static RULES: &[Rule] = &[
+    Rule { info: joist_span::RULE, check: joist_span::check },
+    Rule { info: span_options::RULE, check: span_options::check },
+    Rule { info: bearing::RULE, check: bearing::check },
+    Rule { info: end_restraint::RULE, check: end_restraint::check },
+    Rule { info: bridging::RULE, check: bridging::check },
+    Rule { info: lap::RULE, check: lap::check },
+    Rule { info: notch::RULE, check: notch::check },
+    Rule { info: bored_hole::RULE, check: bored_hole::check },
+    Rule { info: engineered::CUT_RULE, check: engineered::check_cuts },
+    Rule { info: engineered::HOLE_RULE, check: engineered::check_holes },
+    Rule { info: sag::RULE, check: sag::check },
+    Rule { info: moisture::RULE, check: moisture::check },
+    Rule { info: wood_damage::RULE, check: wood_damage::check },
+];
+
+/// Looks a rule up by id.
+pub fn rule(id: &str) -> Option<&'static Rule> {
+    RULES.iter().find(|r| r.info.id == id)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use std::collections::HashSet;
+
+    #[test]
+    fn ids_are_unique_kebab_case() {
+        let mut seen = HashSet::new();
+        for r in RULES {
+            assert!(seen.insert(r.info.id), "duplicate id {}", r.info.id);
+            assert!(
+                r.info.id.chars().all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '-')
+                    && !r.info.id.starts_with('-')
+                    && !r.info.id.ends_with('-'),
+                "{} is not kebab-case",
+                r.info.id
+            );
+            assert!(r.info.code_section.is_some() || r.info.other_source.is_some(), "{} cites nothing", r.info.id);
+        }
+    }
+
+    #[test]
+    fn rule_list_snapshot() {
+        let list: Vec<String> = RULES
+            .iter()
+            .map(|r| format!("{:<26} {:<44} {}", r.info.id, r.info.title, r.info.citation("IRC 2018")))
+            .collect();
+        insta::assert_snapshot!(list.join("\n"));
+    }
+}

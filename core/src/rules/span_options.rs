@@ -1,0 +1,138 @@
+//! Options to discuss for an over-spanned joist, computed, not prescribed: where a mid-span
+//! support would have to go, the smallest standard size, the widest standard spacing.
+
+use super::shared::len;
+use crate::finding::{Finding, FindingBuilder, RuleInfo, Status};
+use crate::lumber::NominalSize;
+use crate::mechanics::{allowable_span, SpanInput};
+use crate::units::Length;
+use crate::validate::MemberContext;
+
+pub const RULE: RuleInfo = RuleInfo {
+    id: "span-options",
+    title: "Options to discuss for an over-span",
+    code_section: Some("R502.3.1"),
+    other_source: Some("NDS 2018 3.3-3.5 (computed alternatives)"),
+};
+
+/// Standard on-centre spacings of the IRC span tables, widest first.
+/// Source: IRC 2018 Tables R502.3.1(1)/(2) columns (12, 16, 19.2, 24 in).
+const STANDARD_SPACINGS: [f64; 4] = [24.0, 19.2, 16.0, 12.0];
+
+/// The options, as data, for the app and the report.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SpanOptions {
+    /// The longest span that passes (rounded as the tables are).
+    pub longest_passing: Length,
+    /// A support line anywhere in this range from support A makes both spans pass.
+    pub support_zone: Option<(Length, Length)>,
+    pub smallest_size: Option<(NominalSize, Length)>,
+    pub widest_spacing: Option<(f64, Length)>,
+}
+
+/// Computes the options for a sawn member whose clear span is over its allowable span.
+pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
+    let (result, span, lumber, spacing) = (ctx.span.as_ref()?, ctx.clear_span()?, ctx.lumber.as_ref()?, ctx.framing.spacing?);
+    let longest = result.allowable_rounded();
+    if span <= longest {
+        return None;
+    }
+    let support_zone = (span <= longest * 2.0).then(|| (span - longest, longest));
+    let base = SpanInput {
+        species: lumber.species,
+        grade: lumber.grade.grade_for_design(),
+        section: lumber.section,
+        spacing,
+        live: ctx.loads.live,
+        dead: ctx.loads.dead,
+        deflection_denominator: ctx.loads.deflection_denominator,
+        wet_service: ctx.is_wet(),
+        duration: Default::default(),
+        repetitive: true,
+    };
+    let passes = |input: &SpanInput| allowable_span(input).map(|r| r.allowable_rounded()).filter(|a| span <= *a);
+    let smallest_size = NominalSize::all_standard_depths(lumber.section.nominal.thickness)
+        .filter(|n| n.depth > lumber.section.nominal.depth)
+        .find_map(|n| passes(&SpanInput { section: n.dressed_section(), ..base.clone() }).map(|a| (n, a)));
+    let widest_spacing = STANDARD_SPACINGS
+        .into_iter()
+        .find_map(|s| passes(&SpanInput { spacing: Length::inches(s), ..base.clone() }).map(|a| (s, a)));
+    Some(SpanOptions { longest_passing: longest, support_zone, smallest_size, widest_spacing })
+}
+
+pub fn check(ctx: &MemberContext) -> Vec<Finding> {
+    if !ctx.report_framing || ctx.kind.is_engineered() {
+        return vec![];
+    }
+    let Some(o) = options(ctx) else { return vec![] };
+    let lumber = ctx.lumber.as_ref().expect("options need lumber");
+    let mut lines = Vec::new();
+    lines.push(match o.support_zone {
+        Some((from, to)) => format!(
+            "A beam or wall across the joists anywhere from {} to {} from support A would leave both spans within {}",
+            len(ctx, from),
+            len(ctx, to),
+            len(ctx, o.longest_passing)
+        ),
+        None => format!("Supports at most {} apart would be needed (more than one)", len(ctx, o.longest_passing)),
+    });
+    lines.push(match o.smallest_size {
+        Some((size, allowable)) => format!(
+            "{size} {} {} at the same spacing allows {}",
+            lumber.species.name(),
+            lumber.grade,
+            len(ctx, allowable)
+        ),
+        None => format!("No {}x size up to {}x14 at this spacing reaches the span", lumber.section.nominal.thickness, lumber.section.nominal.thickness),
+    });
+    lines.push(match o.widest_spacing {
+        Some((spacing, allowable)) => format!("{} at {spacing} in on centre allows {}", lumber.section.nominal, len(ctx, allowable)),
+        None => format!("No standard spacing (12 to 24 in) of {} reaches the span", lumber.section.nominal),
+    });
+    let finding = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None)
+        .summary(format!("Options to discuss: {}", lines.join("; ")))
+        .assume_all(lines)
+        .assume("Same species, grade and loads; each option computed as a simple span. A joist continuous over a new support behaves differently: the design is for a licensed professional.")
+        .not_checked(
+            "options to discuss for the over-span above, computed, not prescribed",
+            "Discuss these options with a licensed professional, who designs the repair.",
+        );
+    debug_assert_eq!(finding.status, Status::NotChecked);
+    vec![finding]
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::rules::testing::*;
+
+    // Source: IRC 2015 Table R502.3.1(2), SPF No. 2 at 40/10 psf: 2x10 at 16 in 15-5 (185 in),
+    // so a 16-0 (192 in) span needs a support between 7 in and 185 in from support A.
+    // The 2x12 and 12 in spacing results follow from the same mechanics (tests/ checks the
+    // mechanics against every printed cell).
+    #[test]
+    fn options_for_a_16_ft_2x10() {
+        let inspection = inspection(spf_no2((2, 10), 192.0), vec![], Default::default());
+        let (ctxs, _) = crate::validate::members(&inspection);
+        let o = options(&ctxs[0]).unwrap();
+        assert_eq!(o.longest_passing, inches(185.0));
+        assert_eq!(o.support_zone, Some((inches(7.0), inches(185.0))));
+        assert_eq!(o.smallest_size.map(|s| s.0), Some(NominalSize::new(2, 12)));
+        assert_eq!(o.widest_spacing.map(|s| s.0), Some(12.0));
+    }
+
+    #[test]
+    fn no_options_when_within() {
+        assert!(run(check, spf_no2((2, 10), 180.0), vec![]).is_empty());
+        let f = run(check, spf_no2((2, 10), 192.0), vec![]);
+        assert_eq!(f.len(), 1);
+        assert!(f[0].summary.contains("2x12"), "{}", f[0].summary);
+    }
+
+    #[test]
+    fn very_long_spans_need_several_supports() {
+        let f = run(check, spf_no2((2, 10), 400.0), vec![]);
+        assert!(f[0].summary.contains("more than one"), "{}", f[0].summary);
+        assert!(f[0].summary.contains("No 2x size"), "{}", f[0].summary);
+    }
+}

@@ -1,0 +1,98 @@
+//! Formats a length back the way a tape reads: feet-inches to the nearest 1/16 in, or mm.
+
+use super::Length;
+use serde::{Deserialize, Serialize};
+
+/// Which units lengths are shown in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default, Serialize, Deserialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum UnitSystem {
+    #[default]
+    Imperial,
+    Metric,
+}
+
+/// `13' 7-1/2"`, `7/8"`, `0"` in imperial; `4150 mm` in metric.
+pub fn format_length(length: Length, units: UnitSystem) -> String {
+    match units {
+        UnitSystem::Metric => format!("{:.0} mm", length.in_millimetres()),
+        UnitSystem::Imperial => feet_inches(length),
+    }
+}
+
+fn feet_inches(length: Length) -> String {
+    let sixteenths = (length.in_inches() * 16.0).round().max(0.0) as u64;
+    let feet = sixteenths / 192;
+    let rest = sixteenths % 192;
+    let (whole, mut top, mut bottom) = (rest / 16, rest % 16, 16);
+    while top != 0 && top % 2 == 0 {
+        top /= 2;
+        bottom /= 2;
+    }
+    let inches = match (whole, top) {
+        (w, 0) => format!("{w}\""),
+        (0, t) => format!("{t}/{bottom}\""),
+        (w, t) => format!("{w}-{t}/{bottom}\""),
+    };
+    if feet == 0 {
+        inches
+    } else {
+        format!("{feet}' {inches}")
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::units::parse_length;
+    use proptest::prelude::*;
+
+    #[test]
+    fn examples() {
+        let table: &[(f64, &str)] = &[
+            (163.5, "13' 7-1/2\""),
+            (192.0, "16' 0\""),
+            (0.875, "7/8\""),
+            (0.0, "0\""),
+            (12.0625, "1' 1/16\""),
+            (185.0, "15' 5\""),
+            (11.99, "1' 0\""),
+            (9.25, "9-1/4\""),
+        ];
+        for (inches, text) in table {
+            assert_eq!(format_length(Length::inches(*inches), UnitSystem::Imperial), *text);
+        }
+        assert_eq!(format_length(Length::millimetres(4150.0), UnitSystem::Metric), "4150 mm");
+    }
+
+    proptest! {
+        #[test]
+        fn imperial_round_trips(sixteenths in 0u32..192_000) {
+            let length = Length::inches(sixteenths as f64 / 16.0);
+            let text = format_length(length, UnitSystem::Imperial);
+            let back = parse_length(&text, None).unwrap();
+            prop_assert_eq!(back.in_inches(), length.in_inches(), "{}", text);
+        }
+
+        #[test]
+        fn metric_round_trips(mm in 0u32..300_000) {
+            let length = Length::millimetres(mm as f64);
+            let text = format_length(length, UnitSystem::Metric);
+            let back = parse_length(&text, None).unwrap();
+            prop_assert!((back.in_millimetres() - mm as f64).abs() < 1e-6, "{}", text);
+        }
+
+        #[test]
+        fn no_input_panics(text in "\\PC{0,60}") {
+            let _ = parse_length(&text, None);
+            let _ = parse_length(&text, Some(12.0));
+        }
+
+        #[test]
+        fn tape_like_input_never_panics(text in "[0-9 .'\"/ftinmc\u{2019}\u{201D}-]{0,40}") {
+            if let Ok(length) = parse_length(&text, Some(1.0)) {
+                prop_assert!(length.in_inches().is_finite() && length.in_inches() >= 0.0);
+            }
+        }
+    }
+}

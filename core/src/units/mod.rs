@@ -1,0 +1,11 @@
+//! Typed quantities: lengths (with the tape-measure parser and formatter) and loads.
+
+mod length;
+mod length_format;
+mod length_parse;
+mod load;
+
+pub use length::Length;
+pub use length_format::{format_length, UnitSystem};
+pub use length_parse::{parse_length, LengthError};
+pub use load::{Psf, Psi};
