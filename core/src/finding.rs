@@ -1,7 +1,10 @@
 //! A finding: what was measured, the limit it is held to, the use ratio, the provision, the
 //! assumptions and a plain recommendation. Built only through `FindingBuilder`.
 
-use crate::units::{format_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, Length, UnitSystem};
+
+/// Lengths shorter than this are shown in inches only (`14"`), longer ones in feet-inches.
+const SHORT_LENGTH_INCHES: f64 = 24.0;
 use serde::Serialize;
 
 /// The share of a limit at which a finding is called "near limit".
@@ -55,6 +58,7 @@ pub enum Value {
 impl Value {
     pub fn text(&self, units: UnitSystem) -> String {
         match self {
+            Value::Length(l) if l.in_inches() < SHORT_LENGTH_INCHES => format_dimension(*l, units),
             Value::Length(l) => format_length(*l, units),
             Value::Percent(p) => format!("{p:.1} %"),
             Value::Count(n) => n.to_string(),
@@ -213,7 +217,11 @@ pub struct Finding {
     pub observation_id: Option<String>,
     /// One line: what, measured against what.
     pub summary: String,
-    /// The governing criterion's values (the one with the highest use of its limit).
+    /// The governing criterion (the one with the highest use of its limit) and its values.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub governing_check: Option<String>,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub bound: Option<Bound>,
     #[serde(skip_serializing_if = "Option::is_none")]
     pub measured: Option<Shown>,
     #[serde(skip_serializing_if = "Option::is_none")]
@@ -224,6 +232,9 @@ pub struct Finding {
     pub checks: Vec<Check>,
     pub assumptions: Vec<String>,
     pub recommendation: String,
+    /// Computed options to discuss (for an over-span).
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub options: Vec<String>,
     #[serde(skip_serializing_if = "Option::is_none")]
     pub not_checked_because: Option<String>,
 }
@@ -250,6 +261,8 @@ impl FindingBuilder {
                 place,
                 observation_id: observation_id.map(str::to_string),
                 summary: String::new(),
+                governing_check: None,
+                bound: None,
                 measured: None,
                 limit: None,
                 ratio: None,
@@ -257,6 +270,7 @@ impl FindingBuilder {
                 checks: Vec::new(),
                 assumptions: Vec::new(),
                 recommendation: String::new(),
+                options: Vec::new(),
                 not_checked_because: None,
             },
         }
@@ -274,6 +288,11 @@ impl FindingBuilder {
 
     pub fn assume_all(mut self, assumptions: impl IntoIterator<Item = String>) -> Self {
         self.finding.assumptions.extend(assumptions);
+        self
+    }
+
+    pub fn option(mut self, option: impl Into<String>) -> Self {
+        self.finding.options.push(option.into());
         self
     }
 
@@ -300,6 +319,8 @@ impl FindingBuilder {
                 .min_by(|a, b| a.status.cmp(&b.status).then(b.ratio.unwrap_or(0.0).total_cmp(&a.ratio.unwrap_or(0.0))))
                 .expect("non-empty");
             f.status = worst.status;
+            f.governing_check = Some(worst.what.clone());
+            f.bound = (worst.ratio.is_some() || worst.measured.value.is_some()).then_some(worst.bound);
             f.measured = Some(worst.measured.clone());
             f.limit = Some(worst.limit.clone());
             f.ratio = worst.ratio;

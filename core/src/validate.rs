@@ -46,10 +46,12 @@ pub struct MemberContext<'a> {
     pub moisture_percent: Option<f64>,
     /// The span computation, for sawn members with lumber and spacing known.
     pub span: Option<SpanResult>,
-    /// Whether member-wide checks (span, bearing, restraint, bridging) are reported for this
-    /// member: true for runs and single members, and for a joist whose framing or moisture
-    /// differs from its run's.
+    /// Whether member-wide checks (bearing, restraint, bridging) are reported for this member:
+    /// true for runs and single members, and for a joist whose framing differs from its run's.
     pub report_framing: bool,
+    /// Whether the span is reported: as `report_framing`, and also for a joist that is wet
+    /// while its run is not (or the reverse), whose span is re-checked.
+    pub report_span: bool,
     /// Why the lumber is not known (for "not checked" findings).
     pub lumber_missing: Vec<&'static str>,
 }
@@ -89,7 +91,7 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
                 let framing = joist.framing.over(&run.framing);
                 let own = joist.framing != Framing::default();
                 let mut ctx = base.member(&joist.id, format!("{where_run} > {}", joist.label), &framing, &joist.observations, own, &mut problems);
-                ctx.report_framing = own || ctx.is_wet() != run_wet;
+                ctx.report_span = own || ctx.is_wet() != run_wet;
                 out.push(ctx);
             }
         }
@@ -198,6 +200,7 @@ impl<'a> Shared<'a> {
             moisture_percent,
             span,
             report_framing,
+            report_span: report_framing,
             lumber_missing,
         }
     }

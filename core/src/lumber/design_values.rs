@@ -162,6 +162,10 @@ mod tests {
 impl DesignValues {
     /// The table citation without the note of where it was transcribed from.
     pub fn source_short(&self) -> &'static str {
-        DESIGN_VALUES_SOURCE
+        if self.size_factor_included {
+            "NDS Supplement (2018) Table 4B"
+        } else {
+            "NDS Supplement (2018) Table 4A"
+        }
     }
 }

@@ -118,7 +118,7 @@ impl fmt::Display for GradeChoice {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         match self {
             GradeChoice::Stamped(g) => f.write_str(g.name()),
-            GradeChoice::NoStampVisible => f.write_str("no grade stamp visible"),
+            GradeChoice::NoStampVisible => write!(f, "no grade stamp visible ({} assumed)", UNKNOWN_GRADE_DEFAULT.name()),
         }
     }
 }

@@ -24,7 +24,7 @@ impl RoomUse {
     pub fn describe(self) -> &'static str {
         match self {
             RoomUse::Sleeping => "sleeping rooms above",
-            RoomUse::Living => "living areas (other than sleeping rooms) above",
+            RoomUse::Living => "rooms other than sleeping rooms above",
         }
     }
 }

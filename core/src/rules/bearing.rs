@@ -2,7 +2,7 @@
 //! concrete, or carried by hangers, ribbon or ledger strips; with the bearing that Fc-perp
 //! requires for the computed reaction (NDS 3.10.2) beside it.
 
-use super::shared::len;
+use super::shared::dim as len;
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::model::{Bearing, BearingSupport, End, ObservationKind};
 use crate::units::Length;

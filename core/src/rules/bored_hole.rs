@@ -1,7 +1,7 @@
 //! Bored holes in sawn lumber joists (IRC R502.8.1): diameter, distance from the edges, from
 //! other holes and from notches.
 
-use super::shared::len;
+use super::shared::{dim, len};
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::geometry::{circle_to_circle, circle_to_rect, hole_circle, notch_rect};
 use crate::model::ObservationKind;
@@ -77,11 +77,11 @@ fn one(ctx: &MemberContext, id: &str, kind: &ObservationKind) -> Finding {
     }
     b.summary(format!(
         "Hole {} across, {} from the support, centre {} above the bottom of a {} deep joist; limits d/3 = {} across, 2\" from edges, holes and notches",
-        len(ctx, *diameter),
+        dim(ctx, *diameter),
         len(ctx, *from_support),
-        len(ctx, *center_above_bottom),
-        len(ctx, d),
-        len(ctx, d * MAX_DIAMETER)
+        dim(ctx, *center_above_bottom),
+        dim(ctx, d),
+        dim(ctx, d * MAX_DIAMETER)
     ))
     .finish(|status| match status {
         Status::OverLimit => "The hole exceeds the code's limits. Refer to a licensed professional for a repair design; do not bore further holes in this joist.".into(),

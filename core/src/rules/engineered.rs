@@ -40,7 +40,7 @@ pub fn check_cuts(ctx: &MemberContext) -> Vec<Finding> {
             Some(
                 FindingBuilder::new(&CUT_RULE, ctx.edition, ctx.place(), Some(&o.id))
                     .check(Check::qualitative("cut or notch", &what, LIMIT, false))
-                    .summary(format!("A {what} in a {}: not permitted without the maker's or a design professional's approval", ctx.kind.name()))
+                    .summary(format!("A {what}, in an engineered member ({}): not permitted without the maker's or a design professional's approval", ctx.kind.name()))
                     .finish(|_| "Refer to a licensed professional or the maker for a repair; cut engineered members can lose much of their strength.".into()),
             )
         })
@@ -56,7 +56,7 @@ pub fn check_holes(ctx: &MemberContext) -> Vec<Finding> {
         .filter(|o| matches!(o.kind, ObservationKind::Hole { .. }))
         .map(|o| {
             FindingBuilder::new(&HOLE_RULE, ctx.edition, ctx.place(), Some(&o.id))
-                .summary(format!("Hole in a {}: check against the maker's instructions", ctx.kind.name()))
+                .summary(format!("Hole in an engineered member ({}): check against the maker's instructions", ctx.kind.name()))
                 .not_checked(
                     "holes in engineered members are governed by the maker's instructions, which this tool does not carry",
                     "Check the hole's size and position against the maker's hole chart for this product, or have a design professional review it.",

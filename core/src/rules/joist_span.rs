@@ -1,7 +1,7 @@
 //! Joist span against the allowable span (IRC R502.3.1, Tables R502.3.1(1)/(2), by NDS
 //! mechanics), with dry or wet service.
 
-use super::shared::{len, load_assumptions, lumber_assumptions};
+use super::shared::{dim, len, load_assumptions, lumber_assumptions};
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::units::Length;
 use crate::validate::MemberContext;
@@ -14,7 +14,7 @@ pub const RULE: RuleInfo = RuleInfo {
 };
 
 pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    if !ctx.report_framing {
+    if !ctx.report_span {
         return vec![];
     }
     let b = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None);
@@ -31,11 +31,11 @@ pub fn check(ctx: &MemberContext) -> Vec<Finding> {
     let allowable = result.allowable_rounded();
     let lumber = ctx.lumber.as_ref().expect("span computed only with lumber");
     let summary = format!(
-        "{} {} {} at {} o.c.: clear span {} against allowable {} ({} governs{})",
+        "{} {}, {}, at {} o.c.: clear span {} against allowable {} ({} governs{})",
         lumber.section.nominal,
         lumber.species.name(),
         lumber.grade,
-        len(ctx, ctx.framing.spacing.unwrap_or_default()),
+        dim(ctx, ctx.framing.spacing.unwrap_or_default()),
         len(ctx, span),
         len(ctx, allowable),
         result.governing.name(),

@@ -1,7 +1,7 @@
 //! Joists lapped over a support: at least 3 in of lap and three 10d face nails, or a splice of
 //! equal strength (IRC R502.6.1).
 
-use super::shared::len;
+use super::shared::dim as len;
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::model::ObservationKind;
 use crate::units::Length;

@@ -1,7 +1,7 @@
 //! Notches in sawn lumber joists (IRC R502.8.1): depth, length, the middle third, the ends,
 //! and the tension side of members 4 in nominal or thicker.
 
-use super::shared::len;
+use super::shared::{dim, len};
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::geometry::{middle_third, notch_rect};
 use crate::model::{Edge, ObservationKind};
@@ -52,9 +52,9 @@ fn one(ctx: &MemberContext, id: &str, kind: &ObservationKind) -> Finding {
         b = b.check(Check::numeric("end notch depth", Value::Length(*notch_depth), Value::Length(d * END_NOTCH_DEPTH), Bound::AtMost, u));
         summary = format!(
             "Notch at the end, {} deep in the {edge_name} edge of a {} deep joist; limit d/4 = {}",
-            len(ctx, *notch_depth),
-            len(ctx, d),
-            len(ctx, d * END_NOTCH_DEPTH)
+            dim(ctx, *notch_depth),
+            dim(ctx, d),
+            dim(ctx, d * END_NOTCH_DEPTH)
         );
     } else {
         b = b
@@ -71,19 +71,19 @@ fn one(ctx: &MemberContext, id: &str, kind: &ObservationKind) -> Finding {
         }
         summary = format!(
             "Notch {} deep x {} long in the {edge_name} edge, {} from the support, in a {} deep joist; limits d/6 = {} deep, d/3 = {} long, outside the middle third",
-            len(ctx, *notch_depth),
-            len(ctx, *length),
+            dim(ctx, *notch_depth),
+            dim(ctx, *length),
             from_support.map_or("?".to_string(), |f| len(ctx, f)),
-            len(ctx, d),
-            len(ctx, d * SPAN_NOTCH_DEPTH),
-            len(ctx, d * NOTCH_LENGTH)
+            dim(ctx, d),
+            dim(ctx, d * SPAN_NOTCH_DEPTH),
+            dim(ctx, d * NOTCH_LENGTH)
         );
     }
     if *notch_depth >= d {
         b = b.assume("The notch entered is as deep as the joist: check the entry");
     }
     b.summary(summary)
-        .assume(format!("Depth of the member d = {} ({})", len(ctx, d), if section.rough_sawn { "measured" } else { "dressed size" }))
+        .assume(format!("Depth of the member d = {} ({})", dim(ctx, d), if section.rough_sawn { "measured" } else { "dressed size" }))
         .finish(|status| match status {
             Status::OverLimit => "The notch exceeds the code's limits and weakens the joist. Refer to a licensed professional for a repair design (for example sistering or reinforcement); do not cut further.".into(),
             Status::NearLimit => "The notch is close to the limit; do not enlarge it.".into(),

@@ -1,7 +1,7 @@
 //! Sag read along a line between the bearings, compared with the L/360 floor reference of
 //! IRC Table R301.7, worded for what it is: a reference, not a limit on long-term sag.
 
-use super::shared::len;
+use super::shared::{dim, len};
 use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
 use crate::model::{ObservationKind, SagReading};
 use crate::units::Length;
@@ -67,9 +67,9 @@ fn one(ctx: &MemberContext, id: &str, readings: &[SagReading], spacer: Option<Le
         .check(Check::numeric("largest sag", Value::Length(sag.largest), Value::Length(reference), Bound::AtMost, ctx.units))
         .summary(format!(
             "Largest sag {} at {} from support A ({ratio_text}) against the L/{n:.0} reference of {} for a {} span",
-            len(ctx, sag.largest),
+            dim(ctx, sag.largest),
             len(ctx, sag.at),
-            len(ctx, reference),
+            dim(ctx, reference),
             len(ctx, span)
         ))
         .assume(format!(

@@ -1,12 +1,17 @@
 //! Text pieces several rules share: loads and lumber assumptions, lengths in the user's units.
 
 use crate::lumber::{GradeChoice, UNKNOWN_GRADE_DEFAULT};
-use crate::units::{format_length, Length};
+use crate::units::{format_dimension, format_length, Length};
 use crate::validate::MemberContext;
 
 /// A length in the inspection's units.
 pub fn len(ctx: &MemberContext, length: Length) -> String {
     format_length(length, ctx.units)
+}
+
+/// A member dimension or short length in the inspection's units (`9-1/4"`).
+pub fn dim(ctx: &MemberContext, length: Length) -> String {
+    format_dimension(length, ctx.units)
 }
 
 /// The assumptions behind any computation with this member's lumber and loads.
@@ -23,8 +28,8 @@ pub fn lumber_assumptions(ctx: &MemberContext) -> Vec<String> {
         if lumber.section.rough_sawn {
             out.push(format!(
                 "Measured section {} x {} used (graded and size-factored as {}); design values of dressed lumber of the same grade assumed",
-                len(ctx, lumber.section.thickness),
-                len(ctx, lumber.section.depth),
+                dim(ctx, lumber.section.thickness),
+                dim(ctx, lumber.section.depth),
                 lumber.section.nominal
             ));
         }

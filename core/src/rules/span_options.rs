@@ -61,7 +61,7 @@ pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
 }
 
 pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    if !ctx.report_framing || ctx.kind.is_engineered() {
+    if !ctx.report_span || ctx.kind.is_engineered() {
         return vec![];
     }
     let Some(o) = options(ctx) else { return vec![] };
@@ -78,7 +78,7 @@ pub fn check(ctx: &MemberContext) -> Vec<Finding> {
     });
     lines.push(match o.smallest_size {
         Some((size, allowable)) => format!(
-            "{size} {} {} at the same spacing allows {}",
+            "{size} {}, {}, at the same spacing allows {}",
             lumber.species.name(),
             lumber.grade,
             len(ctx, allowable)
@@ -89,9 +89,15 @@ pub fn check(ctx: &MemberContext) -> Vec<Finding> {
         Some((spacing, allowable)) => format!("{} at {spacing} in on centre allows {}", lumber.section.nominal, len(ctx, allowable)),
         None => format!("No standard spacing (12 to 24 in) of {} reaches the span", lumber.section.nominal),
     });
-    let finding = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None)
-        .summary(format!("Options to discuss: {}", lines.join("; ")))
-        .assume_all(lines)
+    let mut builder = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None).summary(format!(
+        "Options to discuss for a clear span of {} where {} is allowed",
+        len(ctx, ctx.clear_span().unwrap_or_default()),
+        len(ctx, o.longest_passing)
+    ));
+    for line in lines {
+        builder = builder.option(line);
+    }
+    let finding = builder
         .assume("Same species, grade and loads; each option computed as a simple span. A joist continuous over a new support behaves differently: the design is for a licensed professional.")
         .not_checked(
             "options to discuss for the over-span above, computed, not prescribed",
@@ -126,13 +132,13 @@ mod tests {
         assert!(run(check, spf_no2((2, 10), 180.0), vec![]).is_empty());
         let f = run(check, spf_no2((2, 10), 192.0), vec![]);
         assert_eq!(f.len(), 1);
-        assert!(f[0].summary.contains("2x12"), "{}", f[0].summary);
+        assert!(f[0].options[1].starts_with("2x12"), "{:?}", f[0].options);
     }
 
     #[test]
     fn very_long_spans_need_several_supports() {
         let f = run(check, spf_no2((2, 10), 400.0), vec![]);
-        assert!(f[0].summary.contains("more than one"), "{}", f[0].summary);
-        assert!(f[0].summary.contains("No 2x size"), "{}", f[0].summary);
+        assert!(f[0].options[0].contains("more than one"), "{:?}", f[0].options);
+        assert!(f[0].options[1].contains("No 2x size"), "{:?}", f[0].options);
     }
 }

@@ -20,24 +20,41 @@ pub fn format_length(length: Length, units: UnitSystem) -> String {
     }
 }
 
+/// A member dimension or a short length: inches only in imperial (`14"`, `9-1/4"`), which is
+/// how sizes, spacings, notches and holes are spoken of; mm in metric.
+pub fn format_dimension(length: Length, units: UnitSystem) -> String {
+    match units {
+        UnitSystem::Metric => format!("{:.0} mm", length.in_millimetres()),
+        UnitSystem::Imperial => inches_only(length),
+    }
+}
+
 fn feet_inches(length: Length) -> String {
     let sixteenths = (length.in_inches() * 16.0).round().max(0.0) as u64;
     let feet = sixteenths / 192;
-    let rest = sixteenths % 192;
-    let (whole, mut top, mut bottom) = (rest / 16, rest % 16, 16);
-    while top != 0 && top % 2 == 0 {
-        top /= 2;
-        bottom /= 2;
-    }
-    let inches = match (whole, top) {
-        (w, 0) => format!("{w}\""),
-        (0, t) => format!("{t}/{bottom}\""),
-        (w, t) => format!("{w}-{t}/{bottom}\""),
-    };
+    let inches = inches_text(sixteenths % 192);
     if feet == 0 {
         inches
     } else {
         format!("{feet}' {inches}")
+    }
+}
+
+fn inches_only(length: Length) -> String {
+    inches_text((length.in_inches() * 16.0).round().max(0.0) as u64)
+}
+
+/// Whole inches and a reduced fraction of sixteenths: `7-1/2"`, `7/8"`, `0"`.
+fn inches_text(sixteenths: u64) -> String {
+    let (whole, mut top, mut bottom) = (sixteenths / 16, sixteenths % 16, 16);
+    while top != 0 && top % 2 == 0 {
+        top /= 2;
+        bottom /= 2;
+    }
+    match (whole, top) {
+        (w, 0) => format!("{w}\""),
+        (0, t) => format!("{t}/{bottom}\""),
+        (w, t) => format!("{w}-{t}/{bottom}\""),
     }
 }
 
@@ -63,6 +80,9 @@ mod tests {
             assert_eq!(format_length(Length::inches(*inches), UnitSystem::Imperial), *text);
         }
         assert_eq!(format_length(Length::millimetres(4150.0), UnitSystem::Metric), "4150 mm");
+        assert_eq!(format_dimension(Length::inches(14.0), UnitSystem::Imperial), "14\"");
+        assert_eq!(format_dimension(Length::inches(19.2), UnitSystem::Imperial), "19-3/16\"");
+        assert_eq!(format_dimension(Length::inches(0.4375), UnitSystem::Imperial), "7/16\"");
     }
 
     proptest! {

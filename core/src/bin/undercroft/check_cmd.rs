@@ -1,0 +1,110 @@
+//! `undercroft check FILE.json`: the findings of an inspection, for a terminal or as JSON.
+
+use anyhow::Context;
+use clap::Args;
+use serde_json::json;
+use std::path::PathBuf;
+use undercroft_core::interchange::from_json_bytes;
+use undercroft_core::finding::Bound;
+use undercroft_core::{evaluate, Finding, Inspection, Status, SCREENING_NOTICE};
+
+#[derive(Args)]
+pub struct CheckArgs {
+    /// An inspection file in the interchange format (docs/inspection-format.md).
+    file: PathBuf,
+    /// Print one JSON object: the findings and the input problems.
+    #[arg(long)]
+    json: bool,
+}
+
+pub fn run(args: &CheckArgs) -> anyhow::Result<()> {
+    let bytes = std::fs::read(&args.file).with_context(|| format!("cannot read {}", args.file.display()))?;
+    let inspection = from_json_bytes(&bytes).with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
+    let evaluation = evaluate(&inspection);
+    if args.json {
+        let out = json!({
+            "inspection_id": inspection.id,
+            "code_edition": inspection.code_edition,
+            "notice": SCREENING_NOTICE,
+            "counts": {
+                "over_limit": evaluation.count(Status::OverLimit),
+                "near_limit": evaluation.count(Status::NearLimit),
+                "within": evaluation.count(Status::Within),
+                "not_checked": evaluation.count(Status::NotChecked),
+            },
+            "findings": evaluation.findings,
+            "problems": evaluation.problems,
+        });
+        println!("{}", serde_json::to_string_pretty(&out)?);
+        return Ok(());
+    }
+    print!("{}", render_text(&inspection, &evaluation));
+    Ok(())
+}
+
+/// The terminal rendering: header, counts, findings over limit first, input problems, notice.
+pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evaluation) -> String {
+    let mut out = String::new();
+    let line = |out: &mut String, text: String| {
+        out.push_str(&text);
+        out.push('\n');
+    };
+    line(&mut out, format!("{} - inspected {}", inspection.property.address, inspection.date));
+    line(
+        &mut out,
+        format!(
+            "Code edition: {}{}",
+            inspection.code_edition,
+            if inspection.local_amendments.is_empty() { String::new() } else { format!(" (local amendments: {})", inspection.local_amendments) }
+        ),
+    );
+    line(
+        &mut out,
+        format!(
+            "{} over limit, {} near limit, {} within, {} not checked\n",
+            evaluation.count(Status::OverLimit),
+            evaluation.count(Status::NearLimit),
+            evaluation.count(Status::Within),
+            evaluation.count(Status::NotChecked)
+        ),
+    );
+    for f in evaluation.by_attention() {
+        finding_text(&mut out, f);
+    }
+    if !evaluation.problems.is_empty() {
+        line(&mut out, "Input problems:".into());
+        for p in &evaluation.problems {
+            line(&mut out, format!("  {}: {}", p.location, p.message));
+        }
+        out.push('\n');
+    }
+    line(&mut out, SCREENING_NOTICE.into());
+    out
+}
+
+fn finding_text(out: &mut String, f: &Finding) {
+    let share = f.use_text().map(|u| format!(" {u} of limit")).unwrap_or_default();
+    out.push_str(&format!("[{}{share}] {} - {}\n", f.status.label(), f.rule_id, f.place.location));
+    out.push_str(&format!("  {}\n", f.summary));
+    if let (Some(m), Some(l)) = (&f.measured, &f.limit) {
+        let what = f.governing_check.as_deref().unwrap_or("measured");
+        let bound = match f.bound {
+            Some(Bound::AtLeast) => "at least ",
+            Some(Bound::AtMost) => "at most ",
+            None => "",
+        };
+        out.push_str(&format!("  {what}: {}; limit {bound}{}\n", m.text, l.text));
+    }
+    for option in &f.options {
+        out.push_str(&format!("  option: {option}\n"));
+    }
+    match &f.not_checked_because {
+        Some(why) if !f.summary.starts_with("Not checked") => out.push_str(&format!("  not checked: {why}\n")),
+        _ => {}
+    }
+    out.push_str(&format!("  cites {}\n", f.citation));
+    for a in &f.assumptions {
+        out.push_str(&format!("  assumes: {a}\n"));
+    }
+    out.push_str(&format!("  -> {}\n\n", f.recommendation));
+}
