@@ -27,21 +27,32 @@ fn demo_round_trips_through_json() {
 
 /// Rules that report only one way by nature: options exist only for an over-span; engineered
 /// cuts are always a finding; engineered holes defer to the maker; damage is recorded.
-const ONE_WAY_RULES: [&str; 4] = ["span-options", "engineered-cut", "engineered-hole", "wood-damage"];
+const ONE_WAY_RULES: [&str; 4] = [
+    "span-options",
+    "engineered-cut",
+    "engineered-hole",
+    "wood-damage",
+];
 
 #[test]
 fn demo_triggers_every_rule_over_and_within() {
     let evaluation = evaluate(&demo());
     let mut statuses: BTreeMap<&str, BTreeSet<Status>> = BTreeMap::new();
     for f in &evaluation.findings {
-        statuses.entry(f.rule_id).or_default().insert(f.status);
+        statuses.entry(f.rule_id()).or_default().insert(f.status);
     }
     for rule in RULES {
-        let seen = statuses.get(rule.info.id).unwrap_or_else(|| panic!("{} never triggered", rule.info.id));
+        let seen = statuses
+            .get(rule.info.id)
+            .unwrap_or_else(|| panic!("{} never triggered", rule.info.id));
         if ONE_WAY_RULES.contains(&rule.info.id) {
             continue;
         }
-        assert!(seen.contains(&Status::OverLimit), "{} never over its limit: {seen:?}", rule.info.id);
+        assert!(
+            seen.contains(&Status::OverLimit),
+            "{} never over its limit: {seen:?}",
+            rule.info.id
+        );
         assert!(
             seen.contains(&Status::Within) || seen.contains(&Status::NearLimit),
             "{} never within its limit: {seen:?}",
@@ -53,12 +64,29 @@ fn demo_triggers_every_rule_over_and_within() {
 #[test]
 fn every_finding_carries_citation_and_recommendation() {
     for f in evaluate(&demo()).findings {
-        assert!(f.citation.contains("IRC 2018") || f.citation.contains("NDS"), "{}: {}", f.rule_id, f.citation);
-        assert!(!f.recommendation.is_empty(), "{} has no recommendation", f.rule_id);
-        assert!(!f.summary.is_empty(), "{} has no summary", f.rule_id);
+        let citation = f.citation();
+        assert!(
+            citation.contains("IRC 2018") || citation.contains("NDS"),
+            "{}: {citation}",
+            f.rule_id()
+        );
+        assert!(
+            !f.recommendation().is_empty(),
+            "{} has no recommendation",
+            f.rule_id()
+        );
+        assert!(!f.summary().is_empty(), "{} has no summary", f.rule_id());
         match f.status {
-            Status::NotChecked => assert!(f.not_checked_because.is_some(), "{} says not why", f.rule_id),
-            _ => assert!(f.measured.is_some() && f.limit.is_some(), "{} lacks measured or limit", f.rule_id),
+            Status::NotChecked => assert!(
+                f.not_checked_because.is_some(),
+                "{} says not why",
+                f.rule_id()
+            ),
+            _ => assert!(
+                f.measured().is_some() && f.limit().is_some(),
+                "{} lacks measured or limit",
+                f.rule_id()
+            ),
         }
     }
 }
@@ -73,12 +101,12 @@ fn demo_findings_snapshot() {
             format!(
                 "{:<12} {:<17} {:>5} {} | {} | {} -> {}",
                 f.status.label(),
-                f.rule_id,
+                f.rule_id(),
                 f.use_text().unwrap_or_default(),
                 f.place.location,
-                f.summary,
-                f.measured.as_ref().map(|m| m.text.as_str()).unwrap_or("-"),
-                f.limit.as_ref().map(|l| l.text.as_str()).unwrap_or("-"),
+                f.summary(),
+                f.measured().map(|m| m.text).unwrap_or("-".into()),
+                f.limit().map(|l| l.text).unwrap_or("-".into()),
             )
         })
         .collect();

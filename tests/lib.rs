@@ -4,7 +4,10 @@ use std::path::PathBuf;
 
 /// The repository's root folder.
 pub fn repo_root() -> PathBuf {
-    PathBuf::from(env!("CARGO_MANIFEST_DIR")).parent().expect("tests/ sits in the repo").to_path_buf()
+    PathBuf::from(env!("CARGO_MANIFEST_DIR"))
+        .parent()
+        .expect("tests/ sits in the repo")
+        .to_path_buf()
 }
 
 /// The demo inspection file.

@@ -20,11 +20,19 @@ struct Cell {
 
 fn cells() -> Vec<Cell> {
     let mut out = Vec::new();
-    for (n, line) in CELLS.lines().enumerate().skip(1).filter(|(_, l)| !l.trim().is_empty()) {
+    for (n, line) in CELLS
+        .lines()
+        .enumerate()
+        .skip(1)
+        .filter(|(_, l)| !l.trim().is_empty())
+    {
         let f = csv_fields(line);
         // table,edition,live_psf,dead_psf,defl_limit,species,grade,size,spacing_in,span_ftin,span_in,source,source_title
         let grade = f[6].split('/').next_back().expect("a grade");
-        let num = |i: usize| f[i].parse::<f64>().unwrap_or_else(|e| panic!("line {}: field {i}: {e}", n + 1));
+        let num = |i: usize| {
+            f[i].parse::<f64>()
+                .unwrap_or_else(|e| panic!("line {}: field {i}: {e}", n + 1))
+        };
         out.push(Cell {
             line: n + 1,
             table: f[0].clone(),
@@ -59,7 +67,11 @@ fn is_half_inch_tie(value: f64) -> bool {
 #[test]
 fn every_printed_cell_to_the_inch() {
     let cells = cells();
-    assert_eq!(cells.len(), 155, "the reference file holds 152 ceiling and 3 floor cells");
+    assert_eq!(
+        cells.len(),
+        155,
+        "the reference file holds 152 ceiling and 3 floor cells"
+    );
     let mut failures = Vec::new();
     let mut ties = Vec::new();
     for cell in &cells {
@@ -67,8 +79,14 @@ fn every_printed_cell_to_the_inch() {
         if r.allowable_span_rounded_in == cell.printed_in {
             continue;
         }
-        if is_half_inch_tie(r.allowable_span_in) && (r.allowable_span_in - cell.printed_in).abs() <= 0.5 + 1e-9 {
-            ties.push((cell.line, format!("{:.4}", r.allowable_span_in), cell.printed_in));
+        if is_half_inch_tie(r.allowable_span_in)
+            && (r.allowable_span_in - cell.printed_in).abs() <= 0.5 + 1e-9
+        {
+            ties.push((
+                cell.line,
+                format!("{:.4}", r.allowable_span_in),
+                cell.printed_in,
+            ));
             continue;
         }
         failures.push(format!(
@@ -85,7 +103,13 @@ fn every_printed_cell_to_the_inch() {
             cell.source
         ));
     }
-    assert!(failures.is_empty(), "{} of {} cells differ:\n{}", failures.len(), cells.len(), failures.join("\n"));
+    assert!(
+        failures.is_empty(),
+        "{} of {} cells differ:\n{}",
+        failures.len(),
+        cells.len(),
+        failures.join("\n")
+    );
     // Exempted, each an exact half-inch tie of the mechanics printed one inch below what
     // rounding half up gives: SP SS 2x10 @ 19.2 (277.5 -> printed 277), SPF SS 2x8 @ 16
     // (217.5 -> 217), SPF SS 2x10 @ 16 (277.5 -> 277). The same tie of SP SS 2x8 @ 19.2
@@ -98,7 +122,10 @@ fn every_printed_cell_to_the_inch() {
 // Source: IRC 2015 Table R502.3.1(2), SPF No. 2 2x10 at 16 in o.c., 40/10 psf: 15-5.
 #[test]
 fn floor_cell_governed_by_bending() {
-    let cell = cells().into_iter().find(|c| c.table == "R502.3.1(2)" && c.input.spacing.in_inches() == 16.0).unwrap();
+    let cell = cells()
+        .into_iter()
+        .find(|c| c.table == "R502.3.1(2)" && c.input.spacing.in_inches() == 16.0)
+        .unwrap();
     let r = allowable_span(&cell.input).unwrap();
     assert_eq!(r.allowable_span_rounded_in, 185.0);
     assert_eq!(r.governing.name(), "bending");

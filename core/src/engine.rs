@@ -19,7 +19,13 @@ impl Evaluation {
     /// within a status, the highest use of the limit first; otherwise report order.
     pub fn by_attention(&self) -> Vec<&Finding> {
         let mut out: Vec<&Finding> = self.findings.iter().collect();
-        out.sort_by(|a, b| a.status.cmp(&b.status).then(b.ratio.unwrap_or(0.0).total_cmp(&a.ratio.unwrap_or(0.0))));
+        out.sort_by(|a, b| {
+            a.status.cmp(&b.status).then(
+                b.ratio()
+                    .unwrap_or(0.0)
+                    .total_cmp(&a.ratio().unwrap_or(0.0)),
+            )
+        });
         out
     }
 
@@ -31,10 +37,10 @@ impl Evaluation {
 /// Runs every rule over every member.
 pub fn evaluate(inspection: &Inspection) -> Evaluation {
     let (contexts, problems) = members(inspection);
-    let mut findings = Vec::new();
+    let mut findings = Vec::with_capacity(contexts.len() * 4);
     for ctx in &contexts {
         for rule in RULES {
-            findings.extend((rule.check)(ctx));
+            (rule.check)(ctx, &mut findings);
         }
     }
     Evaluation { findings, problems }

@@ -1,16 +1,25 @@
 //! A finding: what was measured, the limit it is held to, the use ratio, the provision, the
-//! assumptions and a plain recommendation. Built only through `FindingBuilder`.
+//! assumptions and a plain recommendation. Rules build findings only through
+//! `FindingBuilder`; the numbers are set when the rule runs, the wording is written from them
+//! when it is read (`summary`, `assumptions`, `recommendation`), so evaluating stays cheap.
 
+use crate::rules::Detail;
 use crate::units::{format_dimension, format_length, Length, UnitSystem};
-
-/// Lengths shorter than this are shown in inches only (`14"`), longer ones in feet-inches.
-const SHORT_LENGTH_INCHES: f64 = 24.0;
+use crate::validate::MemberContext;
+use serde::ser::SerializeStruct;
 use serde::Serialize;
+use std::borrow::Cow;
+use std::sync::Arc;
+
+/// Text that is usually a fixed phrase and sometimes composed.
+pub type Text = Cow<'static, str>;
 
 /// The share of a limit at which a finding is called "near limit".
 pub const NEAR_LIMIT_RATIO: f64 = 0.9;
 /// Measurements equal to a limit within this relative tolerance count as at the limit.
 const RATIO_TOLERANCE: f64 = 1e-9;
+/// Lengths shorter than this are shown in inches only (`14"`), longer ones in feet-inches.
+const SHORT_LENGTH_INCHES: f64 = 24.0;
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Hash, Serialize)]
 #[serde(rename_all = "kebab-case")]
@@ -46,27 +55,35 @@ impl Status {
     }
 }
 
+/// A length in the given units: inches only below 2 ft, feet-inches above.
+pub fn length_text(length: Length, units: UnitSystem) -> String {
+    if length.in_inches() < SHORT_LENGTH_INCHES {
+        format_dimension(length, units)
+    } else {
+        format_length(length, units)
+    }
+}
+
 /// A measured or limiting value, typed so it can be shown in either unit system.
 #[derive(Debug, Clone, PartialEq)]
 pub enum Value {
     Length(Length),
     Percent(f64),
     Count(u32),
-    Text(String),
+    Text(Text),
 }
 
 impl Value {
     pub fn text(&self, units: UnitSystem) -> String {
         match self {
-            Value::Length(l) if l.in_inches() < SHORT_LENGTH_INCHES => format_dimension(*l, units),
-            Value::Length(l) => format_length(*l, units),
+            Value::Length(l) => length_text(*l, units),
             Value::Percent(p) => format!("{p:.1} %"),
             Value::Count(n) => n.to_string(),
-            Value::Text(t) => t.clone(),
+            Value::Text(t) => t.to_string(),
         }
     }
 
-    fn number(&self) -> Option<f64> {
+    pub fn number(&self) -> Option<f64> {
         match self {
             Value::Length(l) => Some(l.in_inches()),
             Value::Percent(p) => Some(*p),
@@ -75,12 +92,32 @@ impl Value {
         }
     }
 
-    fn unit(&self) -> Option<&'static str> {
+    pub fn unit(&self) -> Option<&'static str> {
         match self {
             Value::Length(_) => Some("in"),
             Value::Percent(_) => Some("%"),
             Value::Count(_) => Some("count"),
             Value::Text(_) => None,
+        }
+    }
+}
+
+/// A value as written out: the number in base units and its text.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Shown {
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub value: Option<f64>,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub unit: Option<&'static str>,
+    pub text: String,
+}
+
+impl Shown {
+    pub fn of(value: &Value, units: UnitSystem) -> Shown {
+        Shown {
+            value: value.number(),
+            unit: value.unit(),
+            text: value.text(units),
         }
     }
 }
@@ -93,40 +130,29 @@ pub enum Bound {
     AtLeast,
 }
 
-/// A value as written in a finding: the number in base units and its text.
-#[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct Shown {
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub value: Option<f64>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub unit: Option<&'static str>,
-    pub text: String,
-}
-
-impl Shown {
-    fn of(value: &Value, units: UnitSystem) -> Shown {
-        Shown { value: value.number(), unit: value.unit(), text: value.text(units) }
-    }
-}
-
 /// One criterion of a finding: a measured value held to one limit.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq)]
 pub struct Check {
-    pub what: String,
-    pub measured: Shown,
-    pub limit: Shown,
+    pub what: Text,
+    pub measured: Value,
+    pub limit: Value,
     pub bound: Bound,
     /// Use of the limit (measured / maximum, or minimum / measured); above 1 is over.
-    #[serde(skip_serializing_if = "Option::is_none")]
     pub ratio: Option<f64>,
     pub status: Status,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub not_checked_because: Option<String>,
+    pub not_checked_because: Option<Text>,
+    pub units: UnitSystem,
 }
 
 impl Check {
     /// A numeric criterion. A zero measurement against a minimum is over with no ratio.
-    pub fn numeric(what: impl Into<String>, measured: Value, limit: Value, bound: Bound, units: UnitSystem) -> Check {
+    pub fn numeric(
+        what: impl Into<Text>,
+        measured: Value,
+        limit: Value,
+        bound: Bound,
+        units: UnitSystem,
+    ) -> Check {
         let ratio = match (measured.number(), limit.number(), bound) {
             (Some(m), Some(l), Bound::AtMost) if l > 0.0 => Some(m / l),
             (Some(m), Some(l), Bound::AtLeast) if m > 0.0 => Some(l / m),
@@ -135,39 +161,81 @@ impl Check {
         let status = ratio.map(Status::of_ratio).unwrap_or(Status::OverLimit);
         Check {
             what: what.into(),
-            measured: Shown::of(&measured, units),
-            limit: Shown::of(&limit, units),
+            measured,
+            limit,
             bound,
             ratio,
             status,
             not_checked_because: None,
+            units,
         }
     }
 
     /// A yes/no criterion (end restraint present, engineered member uncut).
-    pub fn qualitative(what: impl Into<String>, measured: &str, limit: &str, passes: bool) -> Check {
+    pub fn qualitative(
+        what: impl Into<Text>,
+        measured: impl Into<Text>,
+        limit: impl Into<Text>,
+        passes: bool,
+    ) -> Check {
         Check {
             what: what.into(),
-            measured: Shown { value: None, unit: None, text: measured.into() },
-            limit: Shown { value: None, unit: None, text: limit.into() },
+            measured: Value::Text(measured.into()),
+            limit: Value::Text(limit.into()),
             bound: Bound::AtMost,
             ratio: None,
-            status: if passes { Status::Within } else { Status::OverLimit },
+            status: if passes {
+                Status::Within
+            } else {
+                Status::OverLimit
+            },
             not_checked_because: None,
+            units: UnitSystem::Imperial,
         }
     }
 
     /// A criterion that could not be evaluated, with the reason.
-    pub fn skipped(what: impl Into<String>, limit: &str, because: impl Into<String>) -> Check {
+    pub fn skipped(
+        what: impl Into<Text>,
+        limit: impl Into<Text>,
+        because: impl Into<Text>,
+    ) -> Check {
         Check {
             what: what.into(),
-            measured: Shown { value: None, unit: None, text: "not measured".into() },
-            limit: Shown { value: None, unit: None, text: limit.into() },
+            measured: Value::Text(Cow::Borrowed("not measured")),
+            limit: Value::Text(limit.into()),
             bound: Bound::AtMost,
             ratio: None,
             status: Status::NotChecked,
             not_checked_because: Some(because.into()),
+            units: UnitSystem::Imperial,
         }
+    }
+
+    pub fn measured_shown(&self) -> Shown {
+        Shown::of(&self.measured, self.units)
+    }
+
+    pub fn limit_shown(&self) -> Shown {
+        Shown::of(&self.limit, self.units)
+    }
+}
+
+impl Serialize for Check {
+    fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        let mut st = s.serialize_struct("Check", 7)?;
+        st.serialize_field("what", &self.what)?;
+        st.serialize_field("measured", &self.measured_shown())?;
+        st.serialize_field("limit", &self.limit_shown())?;
+        st.serialize_field("bound", &self.bound)?;
+        if let Some(r) = self.ratio {
+            st.serialize_field("ratio", &r)?;
+        }
+        st.serialize_field("status", &self.status)?;
+        if let Some(why) = &self.not_checked_because {
+            st.serialize_field("not_checked_because", why)?;
+        }
+        st.end()
     }
 }
 
@@ -196,53 +264,124 @@ impl RuleInfo {
     }
 }
 
-/// Where a finding sits in the inspection.
+/// Where a finding sits in the inspection. Cheap to clone.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Place {
-    pub area_id: String,
+    pub area_id: Arc<str>,
     /// The run, joist or member the finding is about.
-    pub member_id: String,
+    pub member_id: Arc<str>,
     /// "Crawlspace > Run 1 > Joist 7"
-    pub location: String,
+    pub location: Arc<str>,
 }
 
-#[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct Finding {
-    pub rule_id: &'static str,
-    pub title: &'static str,
-    pub status: Status,
-    #[serde(flatten)]
-    pub place: Place,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub observation_id: Option<String>,
+/// How a finding's wording is written from its numbers; each rule's detail implements it.
+pub trait Wording {
     /// One line: what, measured against what.
-    pub summary: String,
-    /// The governing criterion (the one with the highest use of its limit) and its values.
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub governing_check: Option<String>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub bound: Option<Bound>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub measured: Option<Shown>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub limit: Option<Shown>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub ratio: Option<f64>,
-    pub citation: String,
-    pub checks: Vec<Check>,
-    pub assumptions: Vec<String>,
-    pub recommendation: String,
+    fn summary(&self, units: UnitSystem) -> String;
+    fn assumptions(&self, _units: UnitSystem) -> Vec<String> {
+        Vec::new()
+    }
+    fn recommendation(&self, status: Status, units: UnitSystem) -> String;
     /// Computed options to discuss (for an over-span).
-    #[serde(skip_serializing_if = "Vec::is_empty")]
-    pub options: Vec<String>,
-    #[serde(skip_serializing_if = "Option::is_none")]
-    pub not_checked_because: Option<String>,
+    fn options(&self, _units: UnitSystem) -> Vec<String> {
+        Vec::new()
+    }
+}
+
+#[derive(Debug, Clone, PartialEq)]
+pub struct Finding {
+    pub rule: &'static RuleInfo,
+    pub status: Status,
+    pub place: Place,
+    pub observation_id: Option<Arc<str>>,
+    pub checks: Vec<Check>,
+    /// Index in `checks` of the governing criterion (the highest use of its limit).
+    pub governing: Option<usize>,
+    pub not_checked_because: Option<Text>,
+    pub detail: Detail,
+    pub units: UnitSystem,
+    pub edition: Arc<str>,
 }
 
 impl Finding {
-    /// "112 % of limit" style severity, when the finding has a ratio.
+    pub fn rule_id(&self) -> &'static str {
+        self.rule.id
+    }
+    pub fn title(&self) -> &'static str {
+        self.rule.title
+    }
+    pub fn governing_check(&self) -> Option<&Check> {
+        self.governing.map(|i| &self.checks[i])
+    }
+    pub fn ratio(&self) -> Option<f64> {
+        self.governing_check().and_then(|c| c.ratio)
+    }
+    /// "112 %" style use of the limit, when the finding has a ratio.
     pub fn use_text(&self) -> Option<String> {
-        self.ratio.map(|r| format!("{:.0} %", r * 100.0))
+        self.ratio().map(|r| format!("{:.0} %", r * 100.0))
+    }
+    pub fn measured(&self) -> Option<Shown> {
+        self.governing_check().map(Check::measured_shown)
+    }
+    pub fn limit(&self) -> Option<Shown> {
+        self.governing_check().map(Check::limit_shown)
+    }
+    pub fn citation(&self) -> String {
+        self.rule.citation(&self.edition)
+    }
+    pub fn summary(&self) -> String {
+        match (&self.detail, &self.not_checked_because) {
+            (Detail::Missing(_), Some(why)) => format!("Not checked: {why}"),
+            (d, _) => d.wording().summary(self.units),
+        }
+    }
+    pub fn assumptions(&self) -> Vec<String> {
+        self.detail.wording().assumptions(self.units)
+    }
+    pub fn recommendation(&self) -> String {
+        self.detail
+            .wording()
+            .recommendation(self.status, self.units)
+    }
+    pub fn options(&self) -> Vec<String> {
+        self.detail.wording().options(self.units)
+    }
+}
+
+impl Serialize for Finding {
+    fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        let mut st = s.serialize_struct("Finding", 20)?;
+        st.serialize_field("rule_id", self.rule.id)?;
+        st.serialize_field("title", self.rule.title)?;
+        st.serialize_field("status", &self.status)?;
+        st.serialize_field("area_id", &self.place.area_id)?;
+        st.serialize_field("member_id", &self.place.member_id)?;
+        st.serialize_field("location", &self.place.location)?;
+        if let Some(id) = &self.observation_id {
+            st.serialize_field("observation_id", id)?;
+        }
+        st.serialize_field("summary", &self.summary())?;
+        if let Some(g) = self.governing_check() {
+            st.serialize_field("governing_check", &g.what)?;
+            st.serialize_field("bound", &g.bound)?;
+            st.serialize_field("measured", &g.measured_shown())?;
+            st.serialize_field("limit", &g.limit_shown())?;
+            if let Some(r) = g.ratio {
+                st.serialize_field("ratio", &r)?;
+            }
+        }
+        st.serialize_field("citation", &self.citation())?;
+        st.serialize_field("checks", &self.checks)?;
+        st.serialize_field("assumptions", &self.assumptions())?;
+        st.serialize_field("recommendation", &self.recommendation())?;
+        let options = self.options();
+        if !options.is_empty() {
+            st.serialize_field("options", &options)?;
+        }
+        if let Some(why) = &self.not_checked_because {
+            st.serialize_field("not_checked_because", why)?;
+        }
+        st.end()
     }
 }
 
@@ -252,26 +391,19 @@ pub struct FindingBuilder {
 }
 
 impl FindingBuilder {
-    pub fn new(rule: &RuleInfo, edition: &str, place: Place, observation_id: Option<&str>) -> Self {
+    pub fn new(rule: &'static RuleInfo, ctx: &MemberContext, observation_id: Option<&Arc<str>>) -> Self {
         FindingBuilder {
             finding: Finding {
-                rule_id: rule.id,
-                title: rule.title,
+                rule,
                 status: Status::NotChecked,
-                place,
-                observation_id: observation_id.map(str::to_string),
-                summary: String::new(),
-                governing_check: None,
-                bound: None,
-                measured: None,
-                limit: None,
-                ratio: None,
-                citation: rule.citation(edition),
+                place: ctx.place.clone(),
+                observation_id: observation_id.cloned(),
                 checks: Vec::new(),
-                assumptions: Vec::new(),
-                recommendation: String::new(),
-                options: Vec::new(),
+                governing: None,
                 not_checked_because: None,
+                detail: Detail::Missing("Enter the missing measurements."),
+                units: ctx.units,
+                edition: ctx.edition.clone(),
             },
         }
     }
@@ -281,63 +413,52 @@ impl FindingBuilder {
         self
     }
 
-    pub fn assume(mut self, assumption: impl Into<String>) -> Self {
-        self.finding.assumptions.push(assumption.into());
-        self
-    }
-
-    pub fn assume_all(mut self, assumptions: impl IntoIterator<Item = String>) -> Self {
-        self.finding.assumptions.extend(assumptions);
-        self
-    }
-
-    pub fn option(mut self, option: impl Into<String>) -> Self {
-        self.finding.options.push(option.into());
-        self
-    }
-
-    pub fn summary(mut self, text: impl Into<String>) -> Self {
-        self.finding.summary = text.into();
-        self
-    }
-
-    /// Sets the status, the headline values and the recommendation for that status.
-    /// `recommend` gives the recommendation text for the final status.
-    pub fn finish(mut self, recommend: impl FnOnce(Status) -> String) -> Finding {
+    /// Sets the status and the governing criterion from the checks, and the detail the
+    /// wording is written from.
+    pub fn finish(mut self, detail: Detail) -> Finding {
         let f = &mut self.finding;
-        let evaluated: Vec<&Check> = f.checks.iter().filter(|c| c.status != Status::NotChecked).collect();
-        if evaluated.is_empty() {
-            f.status = Status::NotChecked;
-            if f.not_checked_because.is_none() {
-                let why: Vec<&str> = f.checks.iter().filter_map(|c| c.not_checked_because.as_deref()).collect();
-                f.not_checked_because = Some(if why.is_empty() { "nothing to check".into() } else { why.join("; ") });
+        f.detail = detail;
+        let governing = f
+            .checks
+            .iter()
+            .enumerate()
+            .filter(|(_, c)| c.status != Status::NotChecked)
+            .min_by(|(_, a), (_, b)| {
+                a.status
+                    .cmp(&b.status)
+                    .then(b.ratio.unwrap_or(0.0).total_cmp(&a.ratio.unwrap_or(0.0)))
+            })
+            .map(|(i, c)| (i, c.status));
+        match governing {
+            Some((i, status)) => {
+                f.governing = Some(i);
+                f.status = status;
             }
-        } else {
-            let worst = evaluated
-                .iter()
-                .copied()
-                .min_by(|a, b| a.status.cmp(&b.status).then(b.ratio.unwrap_or(0.0).total_cmp(&a.ratio.unwrap_or(0.0))))
-                .expect("non-empty");
-            f.status = worst.status;
-            f.governing_check = Some(worst.what.clone());
-            f.bound = (worst.ratio.is_some() || worst.measured.value.is_some()).then_some(worst.bound);
-            f.measured = Some(worst.measured.clone());
-            f.limit = Some(worst.limit.clone());
-            f.ratio = worst.ratio;
+            None => {
+                f.status = Status::NotChecked;
+                if f.not_checked_because.is_none() {
+                    let why: Vec<&str> = f
+                        .checks
+                        .iter()
+                        .filter_map(|c| c.not_checked_because.as_deref())
+                        .collect();
+                    f.not_checked_because = Some(if why.is_empty() {
+                        "nothing to check".into()
+                    } else {
+                        why.join("; ").into()
+                    });
+                }
+            }
         }
-        f.recommendation = recommend(f.status);
         self.finding
     }
 
-    /// A finding that could not be evaluated at all.
-    pub fn not_checked(mut self, because: impl Into<String>, recommendation: impl Into<String>) -> Finding {
-        let because = because.into();
-        if self.finding.summary.is_empty() {
-            self.finding.summary = format!("Not checked: {because}");
-        }
-        self.finding.not_checked_because = Some(because);
+    /// A finding that could not be evaluated, with why; `detail` words it (use
+    /// `Detail::Missing` for the plain "Not checked: why"), or a rule's own detail.
+    pub fn not_checked(mut self, because: impl Into<Text>, detail: Detail) -> Finding {
+        self.finding.not_checked_because = Some(because.into());
         self.finding.status = Status::NotChecked;
-        self.finding.recommendation = recommendation.into();
+        self.finding.detail = detail;
         self.finding
     }
 }
@@ -349,7 +470,13 @@ mod tests {
     #[test]
     fn status_thresholds() {
         // Product rule: near limit from 90 % of the limit; over only above 100 %.
-        let table = [(0.5, Status::Within), (0.8999, Status::Within), (0.9, Status::NearLimit), (1.0, Status::NearLimit), (1.0001, Status::OverLimit)];
+        let table = [
+            (0.5, Status::Within),
+            (0.8999, Status::Within),
+            (0.9, Status::NearLimit),
+            (1.0, Status::NearLimit),
+            (1.0001, Status::OverLimit),
+        ];
         for (ratio, status) in table {
             assert_eq!(Status::of_ratio(ratio), status, "{ratio}");
         }
@@ -358,16 +485,45 @@ mod tests {
     #[test]
     fn minimum_limits_use_inverse_ratio() {
         let u = UnitSystem::Imperial;
-        let c = Check::numeric("bearing", Value::Length(Length::inches(1.0)), Value::Length(Length::inches(1.5)), Bound::AtLeast, u);
+        let c = Check::numeric(
+            "bearing",
+            Value::Length(Length::inches(1.0)),
+            Value::Length(Length::inches(1.5)),
+            Bound::AtLeast,
+            u,
+        );
         assert_eq!(c.ratio, Some(1.5));
         assert_eq!(c.status, Status::OverLimit);
-        let zero = Check::numeric("bearing", Value::Length(Length::ZERO), Value::Length(Length::inches(1.5)), Bound::AtLeast, u);
+        let zero = Check::numeric(
+            "bearing",
+            Value::Length(Length::ZERO),
+            Value::Length(Length::inches(1.5)),
+            Bound::AtLeast,
+            u,
+        );
         assert_eq!((zero.ratio, zero.status), (None, Status::OverLimit));
     }
 
     #[test]
     fn citation_carries_the_edition() {
-        let rule = RuleInfo { id: "x", title: "X", code_section: Some("R502.8.1"), other_source: Some("NDS 2018 3.3") };
+        let rule = RuleInfo {
+            id: "x",
+            title: "X",
+            code_section: Some("R502.8.1"),
+            other_source: Some("NDS 2018 3.3"),
+        };
         assert_eq!(rule.citation("IRC 2021"), "IRC 2021 R502.8.1; NDS 2018 3.3");
+    }
+
+    #[test]
+    fn short_lengths_in_inches() {
+        assert_eq!(
+            length_text(Length::inches(14.0), UnitSystem::Imperial),
+            "14\""
+        );
+        assert_eq!(
+            length_text(Length::inches(185.0), UnitSystem::Imperial),
+            "15' 5\""
+        );
     }
 }

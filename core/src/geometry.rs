@@ -34,7 +34,17 @@ fn along(from: f64, extent: f64, end: End, span: Option<Length>) -> Option<(f64,
 /// The notch as a rectangle. A notch at the end with no distance given sits over the bearing,
 /// just outside the clear span.
 pub fn notch_rect(kind: &ObservationKind, depth: Length, span: Option<Length>) -> Option<Rect> {
-    let ObservationKind::Notch { edge, depth: nd, length, at_end, from_support, end } = kind else { return None };
+    let ObservationKind::Notch {
+        edge,
+        depth: nd,
+        length,
+        at_end,
+        from_support,
+        end,
+    } = kind
+    else {
+        return None;
+    };
     let from = match (from_support, at_end) {
         (Some(f), _) => f.in_inches(),
         (None, true) => -length.in_inches(),
@@ -50,9 +60,21 @@ pub fn notch_rect(kind: &ObservationKind, depth: Length, span: Option<Length>) -
 
 /// The hole as a circle.
 pub fn hole_circle(kind: &ObservationKind, span: Option<Length>) -> Option<Circle> {
-    let ObservationKind::Hole { diameter, from_support, end, center_above_bottom } = kind else { return None };
+    let ObservationKind::Hole {
+        diameter,
+        from_support,
+        end,
+        center_above_bottom,
+    } = kind
+    else {
+        return None;
+    };
     let (x, _) = along(from_support.in_inches(), 0.0, *end, span)?;
-    Some(Circle { x, y: center_above_bottom.in_inches(), r: diameter.in_inches() / 2.0 })
+    Some(Circle {
+        x,
+        y: center_above_bottom.in_inches(),
+        r: diameter.in_inches() / 2.0,
+    })
 }
 
 /// Clear distance between a hole's edge and a rectangle (0 if they touch or overlap).
@@ -80,10 +102,23 @@ mod tests {
     // Common practice, no source: plane geometry.
     #[test]
     fn clear_distances() {
-        let c = Circle { x: 10.0, y: 5.0, r: 1.0 };
-        let r = Rect { x0: 14.0, x1: 20.0, y0: 0.0, y1: 2.0 };
+        let c = Circle {
+            x: 10.0,
+            y: 5.0,
+            r: 1.0,
+        };
+        let r = Rect {
+            x0: 14.0,
+            x1: 20.0,
+            y0: 0.0,
+            y1: 2.0,
+        };
         assert!((circle_to_rect(c, r) - (4.0f64.hypot(3.0) - 1.0)).abs() < 1e-12);
-        let d = Circle { x: 16.0, y: 5.0, r: 2.0 };
+        let d = Circle {
+            x: 16.0,
+            y: 5.0,
+            r: 2.0,
+        };
         assert_eq!(circle_to_circle(c, d), 3.0);
         assert_eq!(circle_to_circle(c, c), 0.0);
     }
@@ -97,6 +132,9 @@ mod tests {
             center_above_bottom: Length::inches(4.0),
         };
         assert_eq!(hole_circle(&hole, None), None);
-        assert_eq!(hole_circle(&hole, Some(Length::inches(180.0))).unwrap().x, 150.0);
+        assert_eq!(
+            hole_circle(&hole, Some(Length::inches(180.0))).unwrap().x,
+            150.0
+        );
     }
 }

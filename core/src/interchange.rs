@@ -50,9 +50,15 @@ pub fn from_json(text: &str) -> Result<Inspection> {
         } else {
             inner.to_string()
         };
-        InterchangeError::Field { path: if path == "." { "the top".into() } else { path }, message }
+        InterchangeError::Field {
+            path: if path == "." { "the top".into() } else { path },
+            message,
+        }
     })?;
-    de.end().map_err(|e| InterchangeError::Field { path: "the end".into(), message: e.to_string() })?;
+    de.end().map_err(|e| InterchangeError::Field {
+        path: "the end".into(),
+        message: e.to_string(),
+    })?;
     if inspection.format != FORMAT_NAME {
         return Err(InterchangeError::WrongFormat(inspection.format));
     }
@@ -115,7 +121,9 @@ mod tests {
             r#""date":"2026-12-01","areas":[{"id":"a","name":"Crawl","runs":[{"id":"r","label":"R","framing":{"clear_span":"13''7"}}]}]"#,
         );
         let err = from_json(&bad_span).unwrap_err();
-        let InterchangeError::Field { path, message } = &err else { panic!("{err}") };
+        let InterchangeError::Field { path, message } = &err else {
+            panic!("{err}")
+        };
         assert_eq!(path, "areas[0].runs[0].framing.clear_span");
         assert!(message.contains("13''7"), "{message}");
 
@@ -124,22 +132,43 @@ mod tests {
             r#""date":"2026-12-01","areas":[{"id":"a","name":"Crawl","members":[{"id":"m","label":"M","framing":{"species":"oak"}}]}]"#,
         );
         let err = from_json(&bad_species).unwrap_err().to_string();
-        assert!(err.starts_with("at areas[0].members[0].framing.species: unknown species \"oak\""), "{err}");
+        assert!(
+            err.starts_with("at areas[0].members[0].framing.species: unknown species \"oak\""),
+            "{err}"
+        );
     }
 
     #[test]
     fn garbage_and_edges() {
         assert_eq!(from_json_bytes(b""), Err(InterchangeError::Empty));
         assert_eq!(from_json_bytes(b"\xff\xfe"), Err(InterchangeError::NotText));
-        assert!(matches!(from_json_bytes(&MINIMAL.as_bytes()[..40]), Err(InterchangeError::Field { .. })));
-        assert!(matches!(from_json("[1,2]"), Err(InterchangeError::Field { .. })));
-        assert!(matches!(from_json(&format!("{MINIMAL} x")), Err(InterchangeError::Field { .. })));
+        assert!(matches!(
+            from_json_bytes(&MINIMAL.as_bytes()[..40]),
+            Err(InterchangeError::Field { .. })
+        ));
+        assert!(matches!(
+            from_json("[1,2]"),
+            Err(InterchangeError::Field { .. })
+        ));
+        assert!(matches!(
+            from_json(&format!("{MINIMAL} x")),
+            Err(InterchangeError::Field { .. })
+        ));
         let other = MINIMAL.replace("undercroft-inspection", "something-else");
-        assert!(matches!(from_json(&other), Err(InterchangeError::WrongFormat(_))));
+        assert!(matches!(
+            from_json(&other),
+            Err(InterchangeError::WrongFormat(_))
+        ));
         let newer = MINIMAL.replace(r#""version":1"#, r#""version":9"#);
         assert_eq!(from_json(&newer), Err(InterchangeError::TooNew(9)));
-        let dup = MINIMAL.replace(r#""date":"2026-12-01""#, r#""date":"2026-12-01","areas":[{"id":"a","name":"A"},{"id":"a","name":"B"}]"#);
-        assert_eq!(from_json(&dup), Err(InterchangeError::DuplicateId("a".into())));
+        let dup = MINIMAL.replace(
+            r#""date":"2026-12-01""#,
+            r#""date":"2026-12-01","areas":[{"id":"a","name":"A"},{"id":"a","name":"B"}]"#,
+        );
+        assert_eq!(
+            from_json(&dup),
+            Err(InterchangeError::DuplicateId("a".into()))
+        );
         let big = vec![b' '; MAX_FILE_BYTES + 1];
         assert_eq!(from_json_bytes(&big), Err(InterchangeError::Empty));
     }

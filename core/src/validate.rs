@@ -1,11 +1,13 @@
 //! Turns the inspection as entered into validated members the rules can check, and lists the
 //! input problems found on the way. Never fails: what cannot be used is reported and skipped.
 
+use crate::finding::Place;
 use crate::lumber::{GradeChoice, LoadDuration, Section, Species};
 use crate::mechanics::{allowable_span, SpanInput, SpanResult};
-use crate::model::{Area, Framing, Inspection, MemberKind, Observation, ObservationKind, ResolvedLoads};
+use crate::model::{Framing, Inspection, MemberKind, Observation, ObservationKind, ResolvedLoads};
 use crate::units::{Length, UnitSystem};
 use serde::Serialize;
+use std::sync::Arc;
 
 /// Moisture content above which wood is in wet service.
 /// Source: NDS (2018) Supplement Table 4A adjustment factors (wet service: moisture content
@@ -30,10 +32,9 @@ pub struct Lumber {
 /// A member ready for the rules: merged framing, resolved loads, the span result.
 #[derive(Debug, Clone)]
 pub struct MemberContext<'a> {
-    pub area_id: &'a str,
-    pub member_id: &'a str,
-    pub location: String,
-    pub edition: &'a str,
+    /// Where the member is: area id, member id, "Area > Run > Joist".
+    pub place: Place,
+    pub edition: Arc<str>,
     pub units: UnitSystem,
     pub framing: Framing,
     pub kind: MemberKind,
@@ -58,7 +59,8 @@ pub struct MemberContext<'a> {
 
 impl MemberContext<'_> {
     pub fn is_wet(&self) -> bool {
-        self.moisture_percent.is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT)
+        self.moisture_percent
+            .is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT)
     }
     pub fn clear_span(&self) -> Option<Length> {
         self.framing.clear_span
@@ -66,12 +68,8 @@ impl MemberContext<'_> {
     pub fn depth(&self) -> Option<Length> {
         self.section.map(|s| s.depth)
     }
-    pub fn place(&self) -> crate::finding::Place {
-        crate::finding::Place {
-            area_id: self.area_id.to_string(),
-            member_id: self.member_id.to_string(),
-            location: self.location.clone(),
-        }
+    pub fn member_id(&self) -> &str {
+        &self.place.member_id
     }
 }
 
@@ -79,25 +77,52 @@ impl MemberContext<'_> {
 pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>) {
     let mut out = Vec::new();
     let mut problems = Vec::new();
+    let edition: Arc<str> = Arc::from(inspection.code_edition.as_str());
     for area in &inspection.areas {
         let loads = area.loads.resolve(&inspection.loads);
-        let base = Shared { inspection, area, loads };
+        let base = Shared {
+            inspection,
+            area_id: Arc::from(area.id.as_str()),
+            edition: edition.clone(),
+            loads,
+        };
         for run in &area.runs {
             let where_run = format!("{} > {}", area.name, run.label);
-            let typical = base.member(&run.id, where_run.clone(), &run.framing, &run.observations, true, &mut problems);
+            let typical = base.member(
+                &run.id,
+                where_run.clone(),
+                &run.framing,
+                &run.observations,
+                true,
+                &mut problems,
+            );
             let run_wet = typical.is_wet();
             out.push(typical);
             for joist in &run.joists {
                 let framing = joist.framing.over(&run.framing);
                 let own = joist.framing != Framing::default();
-                let mut ctx = base.member(&joist.id, format!("{where_run} > {}", joist.label), &framing, &joist.observations, own, &mut problems);
+                let mut ctx = base.member(
+                    &joist.id,
+                    format!("{where_run} > {}", joist.label),
+                    &framing,
+                    &joist.observations,
+                    own,
+                    &mut problems,
+                );
                 ctx.report_span = own || ctx.is_wet() != run_wet;
                 out.push(ctx);
             }
         }
         for member in &area.members {
             let location = format!("{} > {}", area.name, member.label);
-            out.push(base.member(&member.id, location, &member.framing, &member.observations, true, &mut problems));
+            out.push(base.member(
+                &member.id,
+                location,
+                &member.framing,
+                &member.observations,
+                true,
+                &mut problems,
+            ));
         }
     }
     (out, problems)
@@ -105,7 +130,8 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
 
 struct Shared<'a> {
     inspection: &'a Inspection,
-    area: &'a Area,
+    area_id: Arc<str>,
+    edition: Arc<str>,
     loads: ResolvedLoads,
 }
 
@@ -119,7 +145,12 @@ impl<'a> Shared<'a> {
         report_framing: bool,
         problems: &mut Vec<Problem>,
     ) -> MemberContext<'a> {
-        let mut problem = |message: String| problems.push(Problem { location: location.clone(), message });
+        let mut problem = |message: String| {
+            problems.push(Problem {
+                location: location.clone(),
+                message,
+            })
+        };
         let kind = framing.kind.unwrap_or_default();
         let mut lumber_missing = Vec::new();
         if framing.species.is_none() {
@@ -132,28 +163,42 @@ impl<'a> Shared<'a> {
             lumber_missing.push("size");
         }
         let section = match (framing.size, framing.actual) {
-            (nominal, Some(actual)) => match Section::from_dimensions(actual.thickness, actual.depth, nominal) {
-                Ok(s) => Some(s),
-                Err(e) => {
-                    problem(format!("actual size: {e}; size not used"));
-                    None
+            (nominal, Some(actual)) => {
+                match Section::from_dimensions(actual.thickness, actual.depth, nominal) {
+                    Ok(s) => Some(s),
+                    Err(e) => {
+                        problem(format!("actual size: {e}; size not used"));
+                        None
+                    }
                 }
-            },
+            }
             (Some(nominal), None) => Some(nominal.dressed_section()),
             (None, None) => None,
         };
         let lumber = match (framing.species, framing.grade, section) {
-            (Some(species), Some(grade), Some(section)) if kind == MemberKind::Sawn => Some(Lumber { species, grade, section }),
+            (Some(species), Some(grade), Some(section)) if kind == MemberKind::Sawn => {
+                Some(Lumber {
+                    species,
+                    grade,
+                    section,
+                })
+            }
             _ => None,
         };
         if let Some(spacing) = framing.spacing {
             if !(4.0..=48.0).contains(&spacing.in_inches()) {
-                problem(format!("spacing {} in is outside 4 to 48 in; spacing not used", spacing.in_inches()));
+                problem(format!(
+                    "spacing {} in is outside 4 to 48 in; spacing not used",
+                    spacing.in_inches()
+                ));
             }
         }
         if let Some(span) = framing.clear_span {
             if span.in_inches() < 12.0 || span.in_inches() > 600.0 {
-                problem(format!("clear span {:.1} in is outside 1 to 50 ft; check the entry", span.in_inches()));
+                problem(format!(
+                    "clear span {:.1} in is outside 1 to 50 ft; check the entry",
+                    span.in_inches()
+                ));
             }
         }
         let mut moisture_percent: Option<f64> = None;
@@ -162,11 +207,15 @@ impl<'a> Shared<'a> {
                 if percent.is_finite() && (0.0..=100.0).contains(&percent) {
                     moisture_percent = Some(moisture_percent.map_or(percent, |m| m.max(percent)));
                 } else {
-                    problem(format!("moisture reading {percent} % is outside 0 to 100 %; reading not used"));
+                    problem(format!(
+                        "moisture reading {percent} % is outside 0 to 100 %; reading not used"
+                    ));
                 }
             }
         }
-        let spacing = framing.spacing.filter(|s| (4.0..=48.0).contains(&s.in_inches()));
+        let spacing = framing
+            .spacing
+            .filter(|s| (4.0..=48.0).contains(&s.in_inches()));
         let wet = moisture_percent.is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT);
         let span = match (&lumber, spacing) {
             (Some(l), Some(spacing)) => allowable_span(&SpanInput {
@@ -186,10 +235,12 @@ impl<'a> Shared<'a> {
         let mut framing = framing.clone();
         framing.spacing = spacing;
         MemberContext {
-            area_id: &self.area.id,
-            member_id: id,
-            location,
-            edition: &self.inspection.code_edition,
+            place: Place {
+                area_id: self.area_id.clone(),
+                member_id: Arc::from(id),
+                location: Arc::from(location.as_str()),
+            },
+            edition: self.edition.clone(),
             units: self.inspection.units,
             framing,
             kind,

@@ -24,8 +24,10 @@ pub struct DesignValues {
     pub e_min: Psi,
     /// True where the size factor is already in the tabulated values (southern pine).
     pub size_factor_included: bool,
-    /// The published source of this row.
-    pub source: String,
+    /// The published source of this row, as the table records it.
+    pub source: &'static str,
+    /// True for a southern pine row wider than 12 in, derived from the 2x12 row with CF 0.9.
+    pub derived_wide: bool,
     /// True where some value of the row was recorded from memory rather than a seen copy.
     pub from_memory: bool,
 }
@@ -38,34 +40,47 @@ fn table() -> &'static HashMap<Key, DesignValues> {
 }
 
 /// The design values for a species, grade and nominal size.
-///
-/// Southern pine values are tabulated per width with the size factor included. For widths
-/// beyond 12 in, NDS Supplement Table 4B (footnote on size factor, from memory) applies
-/// CF = 0.9 to the 2x12 values for Fb, Ft and Fc; that is done here.
-pub fn design_values(species: Species, grade: Grade, size: NominalSize) -> Option<DesignValues> {
+pub fn design_values(
+    species: Species,
+    grade: Grade,
+    size: NominalSize,
+) -> Option<&'static DesignValues> {
     let cells = table();
-    if let Some(v) = cells.get(&(species, grade, None)) {
-        return Some(v.clone());
-    }
-    if let Some(v) = cells.get(&(species, grade, Some(size.depth))) {
-        return Some(v.clone());
-    }
-    if species == Species::SouthernPine && size.depth > 12 {
-        let base = cells.get(&(species, grade, Some(12)))?;
-        let mut v = base.clone();
-        v.fb = Psi(base.fb.0 * 0.9);
-        v.ft = Psi(base.ft.0 * 0.9);
-        v.fc = Psi(base.fc.0 * 0.9);
-        v.from_memory = true;
-        v.source = format!("{}; CF = 0.9 on the 2x12 values for widths over 12 in (from memory)", base.source);
-        return Some(v);
-    }
-    None
+    cells
+        .get(&(species, grade, None))
+        .or_else(|| cells.get(&(species, grade, Some(size.depth))))
 }
 
-fn parse_table(text: &str) -> Result<HashMap<Key, DesignValues>, String> {
+/// Southern pine values are tabulated per width with the size factor included. For widths
+/// beyond 12 in, NDS Supplement Table 4B (footnote on size factor, from memory) applies
+/// CF = 0.9 to the 2x12 values for Fb, Ft and Fc: those rows are added here.
+fn add_wide_southern_pine(cells: &mut HashMap<Key, DesignValues>) {
+    for grade in Grade::ALL {
+        if let Some(base) = cells
+            .get(&(Species::SouthernPine, grade, Some(12)))
+            .cloned()
+        {
+            let wide = DesignValues {
+                fb: Psi(base.fb.0 * 0.9),
+                ft: Psi(base.ft.0 * 0.9),
+                fc: Psi(base.fc.0 * 0.9),
+                from_memory: true,
+                derived_wide: true,
+                ..base
+            };
+            cells.insert((Species::SouthernPine, grade, Some(14)), wide);
+        }
+    }
+}
+
+fn parse_table(text: &'static str) -> Result<HashMap<Key, DesignValues>, String> {
     let mut cells = HashMap::new();
-    for (n, line) in text.lines().enumerate().skip(1).filter(|(_, l)| !l.trim().is_empty()) {
+    for (n, line) in text
+        .lines()
+        .enumerate()
+        .skip(1)
+        .filter(|(_, l)| !l.trim().is_empty())
+    {
         let f = split_csv_line(line);
         if f.len() < 11 {
             return Err(format!("line {}: {} fields", n + 1, f.len()));
@@ -76,7 +91,11 @@ fn parse_table(text: &str) -> Result<HashMap<Key, DesignValues>, String> {
             "all" => None,
             s => Some(s.parse::<NominalSize>().map_err(|e| e.to_string())?.depth),
         };
-        let num = |i: usize| f[i].parse::<f64>().map(Psi).map_err(|e| format!("line {}: {e}", n + 1));
+        let num = |i: usize| {
+            f[i].parse::<f64>()
+                .map(Psi)
+                .map_err(|e| format!("line {}: {e}", n + 1))
+        };
         let note = f.get(11).cloned().unwrap_or_default();
         let values = DesignValues {
             fb: num(3)?,
@@ -88,11 +107,22 @@ fn parse_table(text: &str) -> Result<HashMap<Key, DesignValues>, String> {
             e_min: num(9)?,
             size_factor_included: size.is_some(),
             from_memory: f[10].contains("from memory") || note.contains("from memory"),
-            source: f[10].clone(),
+            source: static_field(text, &f[10]),
+            derived_wide: false,
         };
         cells.insert((species, grade, size), values);
     }
+    add_wide_southern_pine(&mut cells);
     Ok(cells)
+}
+
+/// The same text as `field`, borrowed from the compiled-in table where it appears there
+/// verbatim (every unquoted source does), so rows can point at it for the program's life.
+fn static_field(table: &'static str, field: &str) -> &'static str {
+    table
+        .find(field)
+        .map(|at| &table[at..at + field.len()])
+        .unwrap_or("NDS Supplement (2018)")
 }
 
 /// Splits one CSV line, honouring double-quoted fields.
@@ -121,8 +151,10 @@ mod tests {
     #[test]
     fn every_row_parses() {
         let cells = parse_table(TABLE).unwrap();
-        // 3 species x 4 grades (all widths) + southern pine 4 grades x 5 widths.
-        assert_eq!(cells.len(), 12 + 20);
+        // 3 species x 4 grades (all widths) + southern pine 4 grades x 5 widths, + 4 derived
+        // 2x14 southern pine rows.
+        assert_eq!(cells.len(), 12 + 20 + 4);
+        assert!(cells.values().all(|v| v.source.contains("NDS Supplement")));
     }
 
     // Source: NDS Supplement (2018) Table 4A, spruce-pine-fir No. 1/No. 2:
@@ -130,7 +162,10 @@ mod tests {
     #[test]
     fn spf_no2() {
         let v = design_values(Species::SprucePineFir, Grade::No2, NominalSize::new(2, 10)).unwrap();
-        assert_eq!((v.fb, v.fv, v.fc_perp, v.e), (Psi(875.0), Psi(135.0), Psi(425.0), Psi(1_400_000.0)));
+        assert_eq!(
+            (v.fb, v.fv, v.fc_perp, v.e),
+            (Psi(875.0), Psi(135.0), Psi(425.0), Psi(1_400_000.0))
+        );
         assert!(!v.size_factor_included && !v.from_memory);
     }
 
@@ -141,21 +176,30 @@ mod tests {
         let v = design_values(Species::SouthernPine, Grade::No2, NominalSize::new(2, 10)).unwrap();
         assert_eq!((v.fb, v.e), (Psi(800.0), Psi(1_400_000.0)));
         assert!(v.size_factor_included);
-        let wide = design_values(Species::SouthernPine, Grade::No2, NominalSize::new(2, 14)).unwrap();
+        let wide =
+            design_values(Species::SouthernPine, Grade::No2, NominalSize::new(2, 14)).unwrap();
         assert_eq!(wide.fb, Psi(750.0 * 0.9));
         assert!(wide.from_memory);
     }
 
     #[test]
     fn spf_select_structural_is_flagged_from_memory() {
-        let v = design_values(Species::SprucePineFir, Grade::SelectStructural, NominalSize::new(2, 8)).unwrap();
+        let v = design_values(
+            Species::SprucePineFir,
+            Grade::SelectStructural,
+            NominalSize::new(2, 8),
+        )
+        .unwrap();
         assert_eq!(v.fb, Psi(1250.0));
         assert!(v.from_memory);
     }
 
     #[test]
     fn quoted_fields() {
-        assert_eq!(split_csv_line(r#"a,"b, c","d ""e""",f"#), ["a", "b, c", "d \"e\"", "f"]);
+        assert_eq!(
+            split_csv_line(r#"a,"b, c","d ""e""",f"#),
+            ["a", "b, c", "d \"e\"", "f"]
+        );
     }
 }
 

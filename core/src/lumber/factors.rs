@@ -69,7 +69,12 @@ pub struct WetFactors {
 }
 
 impl WetFactors {
-    pub const DRY: WetFactors = WetFactors { fb: 1.0, fv: 1.0, fc_perp: 1.0, e: 1.0 };
+    pub const DRY: WetFactors = WetFactors {
+        fb: 1.0,
+        fv: 1.0,
+        fc_perp: 1.0,
+        e: 1.0,
+    };
 }
 
 /// Wet service factors for a member whose Fb x CF is `fb_times_cf`.
@@ -91,11 +96,25 @@ mod tests {
     // Source: NDS Supplement (2018) Table 4A size factors for Fb, 2 in thick.
     #[test]
     fn size_factors_two_inch() {
-        let table = [(4, 1.5), (6, 1.3), (8, 1.2), (10, 1.1), (12, 1.0), (14, 0.9)];
+        let table = [
+            (4, 1.5),
+            (6, 1.3),
+            (8, 1.2),
+            (10, 1.1),
+            (12, 1.0),
+            (14, 0.9),
+        ];
         for (depth, cf) in table {
-            assert_eq!(size_factor_fb(Species::SprucePineFir, NominalSize::new(2, depth)), cf, "2x{depth}");
+            assert_eq!(
+                size_factor_fb(Species::SprucePineFir, NominalSize::new(2, depth)),
+                cf,
+                "2x{depth}"
+            );
         }
-        assert_eq!(size_factor_fb(Species::SouthernPine, NominalSize::new(2, 10)), 1.0);
+        assert_eq!(
+            size_factor_fb(Species::SouthernPine, NominalSize::new(2, 10)),
+            1.0
+        );
     }
 
     // Source: NDS (2018) Table 2.3.2.

@@ -118,7 +118,11 @@ impl fmt::Display for GradeChoice {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         match self {
             GradeChoice::Stamped(g) => f.write_str(g.name()),
-            GradeChoice::NoStampVisible => write!(f, "no grade stamp visible ({} assumed)", UNKNOWN_GRADE_DEFAULT.name()),
+            GradeChoice::NoStampVisible => write!(
+                f,
+                "no grade stamp visible ({} assumed)",
+                UNKNOWN_GRADE_DEFAULT.name()
+            ),
         }
     }
 }
@@ -137,7 +141,10 @@ mod tests {
             ("2", GradeChoice::Stamped(Grade::No2)),
             ("No. 1", GradeChoice::Stamped(Grade::No1)),
             ("ss", GradeChoice::Stamped(Grade::SelectStructural)),
-            ("select-structural", GradeChoice::Stamped(Grade::SelectStructural)),
+            (
+                "select-structural",
+                GradeChoice::Stamped(Grade::SelectStructural),
+            ),
             ("#3", GradeChoice::Stamped(Grade::No3)),
             ("none", GradeChoice::NoStampVisible),
             ("no stamp visible", GradeChoice::NoStampVisible),
@@ -151,6 +158,9 @@ mod tests {
     #[test]
     fn unknown_lists_the_known() {
         let err = "construction".parse::<GradeChoice>().unwrap_err();
-        assert!(err.contains("\"construction\"") && err.contains("select-structural"), "{err}");
+        assert!(
+            err.contains("\"construction\"") && err.contains("select-structural"),
+            "{err}"
+        );
     }
 }

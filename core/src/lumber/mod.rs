@@ -7,7 +7,10 @@ mod size;
 mod species;
 
 pub use design_values::{design_values, DesignValues, DESIGN_VALUES_SOURCE};
-pub use factors::{load_duration_factor, size_factor_fb, wet_service, LoadDuration, WetFactors, REPETITIVE_MEMBER_FACTOR};
+pub use factors::{
+    load_duration_factor, size_factor_fb, wet_service, LoadDuration, WetFactors,
+    REPETITIVE_MEMBER_FACTOR,
+};
 pub use grade::{Grade, GradeChoice, UNKNOWN_GRADE_DEFAULT};
 pub use size::{NominalSize, Section, SizeError};
 pub use species::Species;

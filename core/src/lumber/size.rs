@@ -59,13 +59,20 @@ impl NominalSize {
     /// value is not below the measured dimension (a 9-1/4 or a full 10 in depth is a "10").
     pub fn enclosing(thickness: Length, depth: Length) -> Option<NominalSize> {
         let pick = |value: Length, list: &[u8]| {
-            list.iter().copied().find(|&n| n as f64 >= value.in_inches() - 1e-9)
+            list.iter()
+                .copied()
+                .find(|&n| n as f64 >= value.in_inches() - 1e-9)
         };
-        Some(NominalSize::new(pick(thickness, &THICKNESSES)?, pick(depth, &DEPTHS)?))
+        Some(NominalSize::new(
+            pick(thickness, &THICKNESSES)?,
+            pick(depth, &DEPTHS)?,
+        ))
     }
 
     pub fn all_standard_depths(thickness: u8) -> impl Iterator<Item = NominalSize> {
-        DEPTHS.into_iter().map(move |d| NominalSize::new(thickness, d))
+        DEPTHS
+            .into_iter()
+            .map(move |d| NominalSize::new(thickness, d))
     }
 }
 
@@ -126,7 +133,8 @@ impl Section {
     pub fn measured(text: &str, nominal: Option<NominalSize>) -> Result<Section, SizeError> {
         let (t, d) = split_by(text).ok_or_else(|| SizeError::NotASize(text.trim().into()))?;
         let parse = |part: &str| {
-            parse_length(part, Some(1.0)).map_err(|e| SizeError::BadDimension(part.trim().into(), e))
+            parse_length(part, Some(1.0))
+                .map_err(|e| SizeError::BadDimension(part.trim().into(), e))
         };
         let (thickness, depth) = (parse(t)?, parse(d)?);
         Section::from_dimensions(thickness, depth, nominal)
@@ -147,7 +155,12 @@ impl Section {
             None => NominalSize::enclosing(thickness, depth)
                 .ok_or_else(|| SizeError::Unsupported(shown.clone()))?,
         };
-        Ok(Section { thickness, depth, nominal, rough_sawn: true })
+        Ok(Section {
+            thickness,
+            depth,
+            nominal,
+            rough_sawn: true,
+        })
     }
 
     /// Section modulus S = b d^2 / 6 (in^3).
@@ -185,7 +198,14 @@ mod tests {
     // Source: NDS Supplement (2018) Table 1B, dressed depths of 2x4 .. 2x14.
     #[test]
     fn dressed_depths() {
-        let table = [(4, 3.5), (6, 5.5), (8, 7.25), (10, 9.25), (12, 11.25), (14, 13.25)];
+        let table = [
+            (4, 3.5),
+            (6, 5.5),
+            (8, 7.25),
+            (10, 9.25),
+            (12, 11.25),
+            (14, 13.25),
+        ];
         for (nominal, dressed) in table {
             assert_eq!(NominalSize::dressed(nominal).in_inches(), dressed);
         }
@@ -196,11 +216,26 @@ mod tests {
     #[test]
     fn parses_sizes_and_refuses_others() {
         assert_eq!("2x10".parse::<NominalSize>(), Ok(NominalSize::new(2, 10)));
-        assert_eq!(" 2 X 12 ".parse::<NominalSize>(), Ok(NominalSize::new(2, 12)));
-        assert_eq!("4\u{00D7}8".parse::<NominalSize>(), Ok(NominalSize::new(4, 8)));
-        assert!(matches!("2x9".parse::<NominalSize>(), Err(SizeError::Unsupported(_))));
-        assert!(matches!("ten".parse::<NominalSize>(), Err(SizeError::NotASize(_))));
-        assert!(matches!("x10".parse::<NominalSize>(), Err(SizeError::NotASize(_))));
+        assert_eq!(
+            " 2 X 12 ".parse::<NominalSize>(),
+            Ok(NominalSize::new(2, 12))
+        );
+        assert_eq!(
+            "4\u{00D7}8".parse::<NominalSize>(),
+            Ok(NominalSize::new(4, 8))
+        );
+        assert!(matches!(
+            "2x9".parse::<NominalSize>(),
+            Err(SizeError::Unsupported(_))
+        ));
+        assert!(matches!(
+            "ten".parse::<NominalSize>(),
+            Err(SizeError::NotASize(_))
+        ));
+        assert!(matches!(
+            "x10".parse::<NominalSize>(),
+            Err(SizeError::NotASize(_))
+        ));
     }
 
     #[test]
@@ -213,9 +248,21 @@ mod tests {
         assert_eq!(s.depth.in_inches(), 9.5);
         let s = Section::measured("1-5/8 x 9-1/2", None).unwrap();
         assert_eq!(s.thickness.in_inches(), 1.625);
-        assert!(matches!(Section::measured("0x10", None), Err(SizeError::OutOfRange(_))));
-        assert!(matches!(Section::measured("2x30", None), Err(SizeError::OutOfRange(_))));
-        assert!(matches!(Section::measured("2xabc", None), Err(SizeError::BadDimension(..))));
-        assert!(matches!(Section::measured("2x20", None), Err(SizeError::Unsupported(_))));
+        assert!(matches!(
+            Section::measured("0x10", None),
+            Err(SizeError::OutOfRange(_))
+        ));
+        assert!(matches!(
+            Section::measured("2x30", None),
+            Err(SizeError::OutOfRange(_))
+        ));
+        assert!(matches!(
+            Section::measured("2xabc", None),
+            Err(SizeError::BadDimension(..))
+        ));
+        assert!(matches!(
+            Section::measured("2x20", None),
+            Err(SizeError::Unsupported(_))
+        ));
     }
 }

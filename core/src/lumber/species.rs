@@ -72,7 +72,9 @@ impl FromStr for Species {
             .filter(|c| c.is_alphanumeric())
             .collect();
         match key.as_str() {
-            "dfl" | "df" | "douglasfirlarch" | "douglasfir" | "dfir" => Ok(Species::DouglasFirLarch),
+            "dfl" | "df" | "douglasfirlarch" | "douglasfir" | "dfir" => {
+                Ok(Species::DouglasFirLarch)
+            }
             "hf" | "hemfir" => Ok(Species::HemFir),
             "sp" | "syp" | "southernpine" | "southernyellowpine" => Ok(Species::SouthernPine),
             "spf" | "sprucepinefir" => Ok(Species::SprucePineFir),
@@ -113,6 +115,9 @@ mod tests {
     #[test]
     fn unknown_lists_the_known() {
         let err = "oak".parse::<Species>().unwrap_err();
-        assert!(err.contains("\"oak\"") && err.contains("spruce-pine-fir"), "{err}");
+        assert!(
+            err.contains("\"oak\"") && err.contains("spruce-pine-fir"),
+            "{err}"
+        );
     }
 }

@@ -2,8 +2,8 @@
 //! reaction with the bearing length that Fc-perp requires.
 
 use crate::lumber::{
-    design_values, load_duration_factor, size_factor_fb, wet_service, DesignValues, Grade, LoadDuration,
-    Section, Species, WetFactors, REPETITIVE_MEMBER_FACTOR,
+    design_values, load_duration_factor, size_factor_fb, wet_service, DesignValues, Grade,
+    LoadDuration, Section, Species, WetFactors, REPETITIVE_MEMBER_FACTOR,
 };
 use crate::units::{Length, Psf, Psi};
 use serde::Serialize;
@@ -60,7 +60,7 @@ pub struct SpanResult {
     pub w_live_lb_per_in: f64,
     pub w_total_lb_per_in: f64,
     #[serde(skip)]
-    pub design: DesignValues,
+    pub design: &'static DesignValues,
     #[serde(skip)]
     pub section: Section,
 }
@@ -91,9 +91,21 @@ pub struct AppliedFactors {
 pub fn allowable_span(input: &SpanInput) -> Option<SpanResult> {
     let design = design_values(input.species, input.grade, input.section.nominal)?;
     let cd = load_duration_factor(input.duration);
-    let cf = if design.size_factor_included { 1.0 } else { size_factor_fb(input.species, input.section.nominal) };
-    let cr = if input.repetitive && input.spacing.in_inches() <= 24.0 { REPETITIVE_MEMBER_FACTOR } else { 1.0 };
-    let wet = if input.wet_service { wet_service(design.fb.0 * cf) } else { WetFactors::DRY };
+    let cf = if design.size_factor_included {
+        1.0
+    } else {
+        size_factor_fb(input.species, input.section.nominal)
+    };
+    let cr = if input.repetitive && input.spacing.in_inches() <= 24.0 {
+        REPETITIVE_MEMBER_FACTOR
+    } else {
+        1.0
+    };
+    let wet = if input.wet_service {
+        wet_service(design.fb.0 * cf)
+    } else {
+        WetFactors::DRY
+    };
 
     let fb = design.fb.0 * cd * wet.fb * cf * cr;
     let fv = design.fv.0 * cd * wet.fv;
@@ -116,7 +128,13 @@ pub fn allowable_span(input: &SpanInput) -> Option<SpanResult> {
         (Governing::Shear, shear),
     ]
     .into_iter()
-    .fold((Governing::Bending, f64::INFINITY), |best, c| if c.1 < best.1 { c } else { best });
+    .fold((Governing::Bending, f64::INFINITY), |best, c| {
+        if c.1 < best.1 {
+            c
+        } else {
+            best
+        }
+    });
 
     Some(SpanResult {
         allowable_span_in: allowable,
@@ -161,7 +179,8 @@ impl SpanResult {
     /// Bearing length that Fc-perp requires for that reaction: R / (Fc-perp' b).
     /// Source: NDS (2018) 3.10.2 (bearing perpendicular to grain; Cb taken as 1.0).
     pub fn required_bearing(&self, span: Length) -> Length {
-        let capacity_per_inch = self.factors.fc_perp_adjusted_psi * self.section.thickness.in_inches();
+        let capacity_per_inch =
+            self.factors.fc_perp_adjusted_psi * self.section.thickness.in_inches();
         Length::inches(self.reaction_lb(span) / capacity_per_inch)
     }
 
@@ -175,7 +194,14 @@ mod tests {
     use super::*;
     use crate::lumber::NominalSize;
 
-    fn floor(species: Species, grade: Grade, size: (u8, u8), spacing: f64, live: f64, dead: f64) -> SpanResult {
+    fn floor(
+        species: Species,
+        grade: Grade,
+        size: (u8, u8),
+        spacing: f64,
+        live: f64,
+        dead: f64,
+    ) -> SpanResult {
         allowable_span(&SpanInput {
             species,
             grade,
@@ -195,7 +221,14 @@ mod tests {
     // 15-5 (185 in).
     #[test]
     fn spf_no2_2x10_16_oc() {
-        let r = floor(Species::SprucePineFir, Grade::No2, (2, 10), 16.0, 40.0, 10.0);
+        let r = floor(
+            Species::SprucePineFir,
+            Grade::No2,
+            (2, 10),
+            16.0,
+            40.0,
+            10.0,
+        );
         assert_eq!(r.allowable_span_rounded_in, 185.0);
         assert_eq!(r.governing, Governing::Bending);
     }
@@ -205,15 +238,33 @@ mod tests {
     // L = (4/3) 135 x 13.875 / 5.556 = 449.6 in.
     #[test]
     fn shear_span_by_hand() {
-        let r = floor(Species::SprucePineFir, Grade::No2, (2, 10), 16.0, 40.0, 10.0);
-        assert!((r.shear_span_in - 449.55).abs() < 0.1, "{}", r.shear_span_in);
+        let r = floor(
+            Species::SprucePineFir,
+            Grade::No2,
+            (2, 10),
+            16.0,
+            40.0,
+            10.0,
+        );
+        assert!(
+            (r.shear_span_in - 449.55).abs() < 0.1,
+            "{}",
+            r.shear_span_in
+        );
     }
 
     // Source: NDS (2018) 3.10.2: R = 5.556 lb/in x 192 in / 2 = 533.3 lb; Fc-perp' 425 psi x
     // 1.5 in = 637.5 lb/in of bearing; required 0.837 in. Hand computation.
     #[test]
     fn required_bearing_by_hand() {
-        let r = floor(Species::SprucePineFir, Grade::No2, (2, 10), 16.0, 40.0, 10.0);
+        let r = floor(
+            Species::SprucePineFir,
+            Grade::No2,
+            (2, 10),
+            16.0,
+            40.0,
+            10.0,
+        );
         let need = r.required_bearing(Length::inches(192.0)).in_inches();
         assert!((need - 533.33 / 637.5).abs() < 0.001, "{need}");
     }
@@ -223,7 +274,14 @@ mod tests {
     // so the deflection span drops by 0.9^(1/3).
     #[test]
     fn wet_service_reduces_stiffness() {
-        let dry = floor(Species::SprucePineFir, Grade::No2, (2, 10), 16.0, 40.0, 10.0);
+        let dry = floor(
+            Species::SprucePineFir,
+            Grade::No2,
+            (2, 10),
+            16.0,
+            40.0,
+            10.0,
+        );
         let mut input = SpanInput {
             species: Species::SprucePineFir,
             grade: Grade::No2,

@@ -187,7 +187,10 @@ mod tests {
             clear_span: Some(Length::inches(180.0)),
             ..Default::default()
         };
-        let joist = Framing { clear_span: Some(Length::inches(190.0)), ..Default::default() };
+        let joist = Framing {
+            clear_span: Some(Length::inches(190.0)),
+            ..Default::default()
+        };
         let merged = joist.over(&run);
         assert_eq!(merged.species, Some(Species::SprucePineFir));
         assert_eq!(merged.clear_span, Some(Length::inches(190.0)));

@@ -65,16 +65,29 @@ impl LoadSettings {
     /// Source for the defaults: IRC 2018 Table R301.5 (40 psf living areas), the dead loads
     /// of Tables R502.3.1(1)/(2) (10 psf, or 20 psf), Table R301.7 (floors L/360).
     pub fn resolve(&self, outer: &LoadSettings) -> ResolvedLoads {
-        let room_use = self.room_use_above.or(outer.room_use_above).unwrap_or(RoomUse::Living);
+        let room_use = self
+            .room_use_above
+            .or(outer.room_use_above)
+            .unwrap_or(RoomUse::Living);
         let heavy_finish = self.heavy_finish.or(outer.heavy_finish).unwrap_or(false);
-        let live = self.live_psf.or(outer.live_psf).map(Psf).unwrap_or(room_use.live_load());
+        let live = self
+            .live_psf
+            .or(outer.live_psf)
+            .map(Psf)
+            .unwrap_or(room_use.live_load());
         let dead = self
             .dead_psf
             .or(outer.dead_psf)
             .map(Psf)
             .unwrap_or(Psf(if heavy_finish { 20.0 } else { 10.0 }));
         let deflection_denominator = self.deflection.or(outer.deflection).unwrap_or(360.0);
-        ResolvedLoads { room_use, heavy_finish, live, dead, deflection_denominator }
+        ResolvedLoads {
+            room_use,
+            heavy_finish,
+            live,
+            dead,
+            deflection_denominator,
+        }
     }
 }
 
@@ -86,13 +99,26 @@ mod tests {
     // Table R301.7 floors L/360.
     #[test]
     fn resolution_and_defaults() {
-        let top = LoadSettings { room_use_above: Some(RoomUse::Sleeping), ..Default::default() };
-        let area = LoadSettings { heavy_finish: Some(true), ..Default::default() };
+        let top = LoadSettings {
+            room_use_above: Some(RoomUse::Sleeping),
+            ..Default::default()
+        };
+        let area = LoadSettings {
+            heavy_finish: Some(true),
+            ..Default::default()
+        };
         let r = area.resolve(&top);
-        assert_eq!((r.live, r.dead, r.deflection_denominator), (Psf(30.0), Psf(20.0), 360.0));
+        assert_eq!(
+            (r.live, r.dead, r.deflection_denominator),
+            (Psf(30.0), Psf(20.0), 360.0)
+        );
         let r = LoadSettings::default().resolve(&LoadSettings::default());
         assert_eq!((r.live, r.dead), (Psf(40.0), Psf(10.0)));
-        let r = LoadSettings { live_psf: Some(50.0), ..Default::default() }.resolve(&top);
+        let r = LoadSettings {
+            live_psf: Some(50.0),
+            ..Default::default()
+        }
+        .resolve(&top);
         assert_eq!(r.live, Psf(50.0));
     }
 }

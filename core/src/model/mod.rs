@@ -6,7 +6,9 @@ mod inspection;
 mod load;
 mod observation;
 
-pub use framing::{ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind};
+pub use framing::{
+    ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
+};
 pub use inspection::{
     Area, AreaKind, Client, Inspection, InspectorInfo, Joist, JoistRun, Member, PhotoRef, Property,
     FORMAT_NAME, FORMAT_VERSION,

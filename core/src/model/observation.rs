@@ -3,6 +3,7 @@
 use super::{BearingSupport, EndRestraint};
 use crate::units::Length;
 use serde::{Deserialize, Serialize};
+use std::sync::Arc;
 
 /// Which support a position is measured from: end A (the first support named) or end B.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default, Serialize, Deserialize)]
@@ -45,7 +46,8 @@ pub struct SagReading {
 /// One observation with its id and the inspector's note.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct Observation {
-    pub id: String,
+    /// Shared, so that every finding about it can name it without a copy.
+    pub id: Arc<str>,
     #[serde(flatten)]
     pub kind: ObservationKind,
     #[serde(default, skip_serializing_if = "String::is_empty")]

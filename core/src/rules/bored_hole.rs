@@ -2,11 +2,13 @@
 //! other holes and from notches.
 
 use super::shared::{dim, len};
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
+use super::Detail;
+use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
 use crate::geometry::{circle_to_circle, circle_to_rect, hole_circle, notch_rect};
 use crate::model::ObservationKind;
-use crate::units::Length;
+use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "sawn-bored-hole",
@@ -20,74 +22,139 @@ pub const RULE: RuleInfo = RuleInfo {
 const MAX_DIAMETER: f64 = 1.0 / 3.0;
 const MIN_CLEARANCE: Length = Length::inches(2.0);
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     if ctx.kind.is_engineered() {
-        return vec![];
+        return;
     }
-    ctx.observations
-        .iter()
-        .filter(|o| matches!(o.kind, ObservationKind::Hole { .. }))
-        .map(|o| one(ctx, &o.id, &o.kind))
-        .collect()
+    out.extend(
+        ctx.observations
+            .iter()
+            .filter(|o| matches!(o.kind, ObservationKind::Hole { .. }))
+            .map(|o| one(ctx, &o.id, &o.kind)),
+    );
 }
 
-fn one(ctx: &MemberContext, id: &str, kind: &ObservationKind) -> Finding {
-    let ObservationKind::Hole { diameter, from_support, center_above_bottom, .. } = kind else {
+/// What a bored-hole finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct HoleDetail {
+    pub diameter: Length,
+    pub from_support: Length,
+    pub centre_above_bottom: Length,
+    pub member_depth: Length,
+}
+
+fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
+    let ObservationKind::Hole {
+        diameter,
+        from_support,
+        center_above_bottom,
+        ..
+    } = kind
+    else {
         unreachable!("filtered to holes")
     };
-    let b = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), Some(id));
+    let b = FindingBuilder::new(&RULE, ctx, Some(id));
     let Some(d) = ctx.depth() else {
-        return b.not_checked("joist size not entered, so its depth is unknown", "Enter the joist size to check the hole.");
+        return b.not_checked(
+            "joist size not entered, so its depth is unknown",
+            Detail::Missing("Enter the joist size to check the hole."),
+        );
     };
     let u = ctx.units;
     let r = diameter.in_inches() / 2.0;
     let y = center_above_bottom.in_inches();
     let to_top = Length::inches((d.in_inches() - y - r).max(0.0));
     let to_bottom = Length::inches((y - r).max(0.0));
-    let clearance = |what: &str, measured: Length| Check::numeric(what, Value::Length(measured), Value::Length(MIN_CLEARANCE), Bound::AtLeast, u);
+    let clearance = |what: &'static str, measured: Length| {
+        Check::numeric(
+            what,
+            Value::Length(measured),
+            Value::Length(MIN_CLEARANCE),
+            Bound::AtLeast,
+            u,
+        )
+    };
     let mut b = b
-        .check(Check::numeric("hole diameter", Value::Length(*diameter), Value::Length(d * MAX_DIAMETER), Bound::AtMost, u))
+        .check(Check::numeric(
+            "hole diameter",
+            Value::Length(*diameter),
+            Value::Length(d * MAX_DIAMETER),
+            Bound::AtMost,
+            u,
+        ))
         .check(clearance("distance to the top edge", to_top))
         .check(clearance("distance to the bottom edge", to_bottom));
 
     let span = ctx.clear_span();
     let me = hole_circle(kind, span);
-    let others: Vec<_> = ctx.observations.iter().filter(|o| o.id != id).collect();
-    if others.iter().any(|o| matches!(o.kind, ObservationKind::Hole { .. })) {
+    let others: Vec<_> = ctx.observations.iter().filter(|o| o.id != *id).collect();
+    if others
+        .iter()
+        .any(|o| matches!(o.kind, ObservationKind::Hole { .. }))
+    {
         let nearest = me.and_then(|c| {
-            let mut gaps = others.iter().filter_map(|o| hole_circle(&o.kind, span).map(|h| circle_to_circle(c, h)));
+            let mut gaps = others
+                .iter()
+                .filter_map(|o| hole_circle(&o.kind, span).map(|h| circle_to_circle(c, h)));
             let first = gaps.next()?;
             Some(gaps.fold(first, f64::min))
         });
         b = b.check(match nearest {
             Some(gap) => clearance("distance to the nearest other hole", Length::inches(gap)),
-            None => Check::skipped("distance to the nearest other hole", "2\" minimum", "positions measured from different supports and the clear span not entered"),
+            None => Check::skipped(
+                "distance to the nearest other hole",
+                "2\" minimum",
+                "positions measured from different supports and the clear span not entered",
+            ),
         });
     }
-    if others.iter().any(|o| matches!(o.kind, ObservationKind::Notch { .. })) {
+    if others
+        .iter()
+        .any(|o| matches!(o.kind, ObservationKind::Notch { .. }))
+    {
         let nearest = me.and_then(|c| {
-            let mut gaps = others.iter().filter_map(|o| notch_rect(&o.kind, d, span).map(|n| circle_to_rect(c, n)));
+            let mut gaps = others
+                .iter()
+                .filter_map(|o| notch_rect(&o.kind, d, span).map(|n| circle_to_rect(c, n)));
             let first = gaps.next()?;
             Some(gaps.fold(first, f64::min))
         });
         b = b.check(match nearest {
             Some(gap) => clearance("distance to the nearest notch", Length::inches(gap)),
-            None => Check::skipped("distance to the nearest notch", "2\" minimum", "the notch's position is not known on the same line"),
+            None => Check::skipped(
+                "distance to the nearest notch",
+                "2\" minimum",
+                "the notch's position is not known on the same line",
+            ),
         });
     }
-    b.summary(format!(
-        "Hole {} across, {} from the support, centre {} above the bottom of a {} deep joist; limits d/3 = {} across, 2\" from edges, holes and notches",
-        dim(ctx, *diameter),
-        len(ctx, *from_support),
-        dim(ctx, *center_above_bottom),
-        dim(ctx, d),
-        dim(ctx, d * MAX_DIAMETER)
-    ))
-    .finish(|status| match status {
-        Status::OverLimit => "The hole exceeds the code's limits. Refer to a licensed professional for a repair design; do not bore further holes in this joist.".into(),
-        Status::NearLimit => "The hole is close to a limit; do not enlarge it or bore near it.".into(),
-        _ => "Within the code's limits for bored holes.".into(),
-    })
+    b.finish(Detail::Hole(HoleDetail {
+        diameter: *diameter,
+        from_support: *from_support,
+        centre_above_bottom: *center_above_bottom,
+        member_depth: d,
+    }))
+}
+
+impl Wording for HoleDetail {
+    fn summary(&self, u: UnitSystem) -> String {
+        format!(
+            "Hole {} across, {} from the support, centre {} above the bottom of a {} deep joist; limits d/3 = {} across, 2\" from edges, holes and notches",
+            dim(u, self.diameter),
+            len(u, self.from_support),
+            dim(u, self.centre_above_bottom),
+            dim(u, self.member_depth),
+            dim(u, self.member_depth * MAX_DIAMETER)
+        )
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
+            Status::OverLimit => "The hole exceeds the code's limits. Refer to a licensed professional for a repair design; do not bore further holes in this joist.".into(),
+            Status::NearLimit => "The hole is close to a limit; do not enlarge it or bore near it.".into(),
+            _ => "Within the code's limits for bored holes.".into(),
+        }
+    }
 }
 
 #[cfg(test)]
@@ -124,7 +191,11 @@ mod tests {
             (1.0, 6.9, Status::OverLimit),
         ];
         for (diameter, centre, expect) in table {
-            assert_eq!(first(vec![hole("h", diameter, 30.0, centre)]), expect, "{diameter} at {centre}");
+            assert_eq!(
+                first(vec![hole("h", diameter, 30.0, centre)]),
+                expect,
+                "{diameter} at {centre}"
+            );
         }
     }
 
@@ -132,8 +203,20 @@ mod tests {
     #[test]
     fn spacing_to_holes_and_notches() {
         // 1 in holes with centres 3 in apart: 2 in clear.
-        assert_eq!(first(vec![hole("a", 1.0, 30.0, 4.625), hole("b", 1.0, 33.0, 4.625)]), Status::NearLimit);
-        assert_eq!(first(vec![hole("a", 1.0, 30.0, 4.625), hole("b", 1.0, 32.5, 4.625)]), Status::OverLimit);
+        assert_eq!(
+            first(vec![
+                hole("a", 1.0, 30.0, 4.625),
+                hole("b", 1.0, 33.0, 4.625)
+            ]),
+            Status::NearLimit
+        );
+        assert_eq!(
+            first(vec![
+                hole("a", 1.0, 30.0, 4.625),
+                hole("b", 1.0, 32.5, 4.625)
+            ]),
+            Status::OverLimit
+        );
         let notch = observation(ObservationKind::Notch {
             edge: Edge::Bottom,
             depth: inches(1.5),
@@ -144,10 +227,19 @@ mod tests {
         });
         // Notch 1.5 in deep from x = 20 to 22; a 1 in hole above it centred 4 in up: 2.0 in
         // clear; centred 3.9 in up: 1.9 in clear.
-        assert_eq!(first(vec![hole("a", 1.0, 21.0, 4.0), notch.clone()]), Status::NearLimit);
-        assert_eq!(first(vec![hole("a", 1.0, 21.0, 3.9), notch.clone()]), Status::OverLimit);
+        assert_eq!(
+            first(vec![hole("a", 1.0, 21.0, 4.0), notch.clone()]),
+            Status::NearLimit
+        );
+        assert_eq!(
+            first(vec![hole("a", 1.0, 21.0, 3.9), notch.clone()]),
+            Status::OverLimit
+        );
         // Beside the notch: x = 24.5, centre at 1 in up: 2.5 - 0.5 = 2.0 in clear horizontally,
         // but only 0.5 in from the bottom edge, which governs.
-        assert_eq!(first(vec![hole("a", 1.0, 24.5, 1.0), notch]), Status::OverLimit);
+        assert_eq!(
+            first(vec![hole("a", 1.0, 24.5, 1.0), notch]),
+            Status::OverLimit
+        );
     }
 }

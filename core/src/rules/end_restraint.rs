@@ -1,8 +1,12 @@
 //! End restraint of joists against rotation (IRC R502.7).
 
-use crate::finding::{Check, Finding, FindingBuilder, RuleInfo, Status};
-use crate::model::{End, EndRestraint, ObservationKind};
+use super::shared::Ends;
+use super::Detail;
+use crate::finding::{Check, Finding, FindingBuilder, RuleInfo, Status, Wording};
+use crate::model::{EndRestraint, ObservationKind};
+use crate::units::UnitSystem;
 use crate::validate::MemberContext;
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "end-restraint",
@@ -13,35 +17,64 @@ pub const RULE: RuleInfo = RuleInfo {
 
 const LIMIT: &str = "full-depth blocking, header, rim or band joist, or an adjoining stud";
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    let mut out = Vec::new();
+/// What an end-restraint finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct RestraintDetail {
+    pub ends: Ends,
+    pub restraint: EndRestraint,
+}
+
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     if ctx.report_framing {
         match ctx.framing.end_restraint {
-            Some(r) => out.push(one(ctx, r, "both ends", None)),
-            None => out.push(
-                FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None)
-                    .not_checked("end restraint not recorded", "Record what holds the joist ends (rim, blocking, header)."),
-            ),
+            Some(r) => out.push(one(ctx, r, Ends::Both, None)),
+            None => out.push(FindingBuilder::new(&RULE, ctx, None).not_checked(
+                "end restraint not recorded",
+                Detail::Missing("Record what holds the joist ends (rim, blocking, header)."),
+            )),
         }
     }
     for o in &ctx.observations {
         if let ObservationKind::Restraint { end, restraint } = o.kind {
-            let which = if end == End::A { "end A" } else { "end B" };
-            out.push(one(ctx, restraint, which, Some(&o.id)));
+            out.push(one(ctx, restraint, Ends::One(end), Some(&o.id)));
         }
     }
-    out
 }
 
-fn one(ctx: &MemberContext, restraint: EndRestraint, which: &str, observation: Option<&str>) -> Finding {
-    let present = restraint != EndRestraint::None;
-    FindingBuilder::new(&RULE, ctx.edition, ctx.place(), observation)
-        .check(Check::qualitative(format!("restraint at {which}"), restraint.name(), LIMIT, present))
-        .summary(format!("End restraint at {which}: {}", restraint.name()))
-        .finish(|status| match status {
-            Status::OverLimit => "Add full-depth blocking or a rim joist at the joist ends so they cannot roll.".into(),
+fn one(
+    ctx: &MemberContext,
+    restraint: EndRestraint,
+    ends: Ends,
+    observation: Option<&Arc<str>>,
+) -> Finding {
+    FindingBuilder::new(&RULE, ctx, observation)
+        .check(Check::qualitative(
+            format!("restraint at {}", ends.name()),
+            restraint.name(),
+            LIMIT,
+            restraint != EndRestraint::None,
+        ))
+        .finish(Detail::EndRestraint(RestraintDetail { ends, restraint }))
+}
+
+impl Wording for RestraintDetail {
+    fn summary(&self, _: UnitSystem) -> String {
+        format!(
+            "End restraint at {}: {}",
+            self.ends.name(),
+            self.restraint.name()
+        )
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
+            Status::OverLimit => {
+                "Add full-depth blocking or a rim joist at the joist ends so they cannot roll."
+                    .into()
+            }
             _ => "Ends are restrained.".into(),
-        })
+        }
+    }
 }
 
 #[cfg(test)]
@@ -65,6 +98,9 @@ mod tests {
             f.end_restraint = Some(restraint);
             assert_eq!(status(check, f, vec![]), expect, "{restraint:?}");
         }
-        assert_eq!(status(check, spf_no2((2, 10), 180.0), vec![]), Status::NotChecked);
+        assert_eq!(
+            status(check, spf_no2((2, 10), 180.0), vec![]),
+            Status::NotChecked
+        );
     }
 }

@@ -1,11 +1,13 @@
 //! Joists lapped over a support: at least 3 in of lap and three 10d face nails, or a splice of
 //! equal strength (IRC R502.6.1).
 
-use super::shared::dim as len;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
+use super::shared::dim;
+use super::Detail;
+use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
 use crate::model::ObservationKind;
-use crate::units::Length;
+use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "lap-over-support",
@@ -19,45 +21,99 @@ pub const RULE: RuleInfo = RuleInfo {
 const MIN_LAP: Length = Length::inches(3.0);
 const MIN_NAILS: u32 = 3;
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    ctx.observations
-        .iter()
-        .filter_map(|o| match &o.kind {
-            ObservationKind::Lap { length, nails, spliced } => Some(one(ctx, &o.id, *length, *nails, *spliced)),
-            _ => None,
-        })
-        .collect()
+/// What a lap finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct LapDetail {
+    pub length: Option<Length>,
+    pub nails: Option<u32>,
+    pub spliced: bool,
 }
 
-fn one(ctx: &MemberContext, id: &str, length: Option<Length>, nails: Option<u32>, spliced: bool) -> Finding {
-    let b = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), Some(id));
-    if spliced {
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
+    out.extend(ctx.observations.iter().filter_map(|o| match &o.kind {
+        ObservationKind::Lap {
+            length,
+            nails,
+            spliced,
+        } => Some(one(
+            ctx,
+            &o.id,
+            LapDetail {
+                length: *length,
+                nails: *nails,
+                spliced: *spliced,
+            },
+        )),
+        _ => None,
+    }));
+}
+
+fn one(ctx: &MemberContext, id: &Arc<str>, lap: LapDetail) -> Finding {
+    let b = FindingBuilder::new(&RULE, ctx, Some(id));
+    if lap.spliced {
         return b
-            .check(Check::qualitative("connection over the support", "spliced", "a splice of equal strength", true))
-            .summary("Joists spliced over the support instead of lapped")
-            .assume("The splice's strength was not evaluated")
-            .finish(|_| "Confirm the splice is of equal strength to a 3 in lap with three 10d nails.".into());
+            .check(Check::qualitative(
+                "connection over the support",
+                "spliced",
+                "a splice of equal strength",
+                true,
+            ))
+            .finish(Detail::Lap(lap));
     }
-    let lap = match length {
-        Some(l) => Check::numeric("lap length", Value::Length(l), Value::Length(MIN_LAP), Bound::AtLeast, ctx.units),
+    let length = match lap.length {
+        Some(l) => Check::numeric(
+            "lap length",
+            Value::Length(l),
+            Value::Length(MIN_LAP),
+            Bound::AtLeast,
+            ctx.units,
+        ),
         None => Check::skipped("lap length", "3\" minimum", "lap length not measured"),
     };
-    let nailing = match nails {
-        Some(n) => Check::numeric("10d face nails", Value::Count(n), Value::Count(MIN_NAILS), Bound::AtLeast, ctx.units),
+    let nailing = match lap.nails {
+        Some(n) => Check::numeric(
+            "10d face nails",
+            Value::Count(n),
+            Value::Count(MIN_NAILS),
+            Bound::AtLeast,
+            ctx.units,
+        ),
         None => Check::skipped("10d face nails", "3 minimum", "nails not counted"),
     };
-    let summary = format!(
-        "Lap over the support: {}, {} nails; minimum {} and {}",
-        length.map_or("length not measured".into(), |l| len(ctx, l)),
-        nails.map_or("?".into(), |n| n.to_string()),
-        len(ctx, MIN_LAP),
-        MIN_NAILS
-    );
-    b.check(lap).check(nailing).summary(summary).finish(|status| match status {
-        Status::OverLimit => "Lengthen the lap or add nails (at least 3 in of lap and three 10d face nails), or add a splice of equal strength.".into(),
-        Status::NotChecked => "Measure the lap and count the nails.".into(),
-        _ => "Lap meets the minimum.".into(),
-    })
+    b.check(length).check(nailing).finish(Detail::Lap(lap))
+}
+
+impl Wording for LapDetail {
+    fn summary(&self, u: UnitSystem) -> String {
+        if self.spliced {
+            return "Joists spliced over the support instead of lapped".into();
+        }
+        format!(
+            "Lap over the support: {}, {} nails; minimum {} and {}",
+            self.length
+                .map_or("length not measured".into(), |l| dim(u, l)),
+            self.nails.map_or("?".into(), |n| n.to_string()),
+            dim(u, MIN_LAP),
+            MIN_NAILS
+        )
+    }
+
+    fn assumptions(&self, _: UnitSystem) -> Vec<String> {
+        if self.spliced {
+            vec!["The splice's strength was not evaluated".into()]
+        } else {
+            vec![]
+        }
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
+            _ if self.spliced => "Confirm the splice is of equal strength to a 3 in lap with three 10d nails.".into(),
+            Status::OverLimit => "Lengthen the lap or add nails (at least 3 in of lap and three 10d face nails), or add a splice of equal strength.".into(),
+            Status::NotChecked => "Measure the lap and count the nails.".into(),
+            _ => "Lap meets the minimum.".into(),
+        }
+    }
 }
 
 #[cfg(test)]
@@ -66,7 +122,11 @@ mod tests {
     use crate::rules::testing::*;
 
     fn lap(length: Option<f64>, nails: Option<u32>) -> Vec<crate::model::Observation> {
-        vec![observation(ObservationKind::Lap { length: length.map(inches), nails, spliced: false })]
+        vec![observation(ObservationKind::Lap {
+            length: length.map(inches),
+            nails,
+            spliced: false,
+        })]
     }
 
     // Source: IRC 2018 R502.6.1: lap at least 3 in, three 10d face nails.
@@ -81,7 +141,11 @@ mod tests {
             (None, None, Status::NotChecked),
         ];
         for (length, nails, expect) in table {
-            assert_eq!(status(check, spf_no2((2, 10), 180.0), lap(length, nails)), expect, "{length:?} {nails:?}");
+            assert_eq!(
+                status(check, spf_no2((2, 10), 180.0), lap(length, nails)),
+                expect,
+                "{length:?} {nails:?}"
+            );
         }
     }
 }

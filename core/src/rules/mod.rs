@@ -2,14 +2,14 @@
 //! pure check of one validated member. `RULES` lists them all and sets report order.
 
 mod bearing;
+mod bored_hole;
 mod bridging;
-mod engineered;
 mod end_restraint;
+mod engineered;
 mod joist_span;
 mod lap;
 mod moisture;
 mod notch;
-mod bored_hole;
 mod sag;
 mod shared;
 mod span_options;
@@ -18,30 +18,125 @@ mod wood_damage;
 #[cfg(test)]
 pub(crate) mod testing;
 
-use crate::finding::{Finding, RuleInfo};
+use crate::finding::{Finding, RuleInfo, Status, Wording};
+use crate::units::UnitSystem;
 use crate::validate::MemberContext;
+
+/// The numbers a finding's wording is written from, one variant per kind of finding.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Detail {
+    /// Not checked for want of input; the finding says why, and this is what to do.
+    Missing(&'static str),
+    JoistSpan(joist_span::SpanDetail),
+    SpanOptions(span_options::OptionsDetail),
+    Bearing(bearing::BearingDetail),
+    EndRestraint(end_restraint::RestraintDetail),
+    Bridging(bridging::BridgingDetail),
+    Lap(lap::LapDetail),
+    Notch(notch::NotchDetail),
+    Hole(bored_hole::HoleDetail),
+    Engineered(engineered::EngineeredDetail),
+    Sag(sag::SagDetail),
+    Moisture(moisture::MoistureDetail),
+    Damage(wood_damage::DamageDetail),
+}
+
+impl Detail {
+    pub fn wording(&self) -> &dyn Wording {
+        match self {
+            Detail::Missing(_) => self,
+            Detail::JoistSpan(d) => d,
+            Detail::SpanOptions(d) => d,
+            Detail::Bearing(d) => d,
+            Detail::EndRestraint(d) => d,
+            Detail::Bridging(d) => d,
+            Detail::Lap(d) => d,
+            Detail::Notch(d) => d,
+            Detail::Hole(d) => d,
+            Detail::Engineered(d) => d,
+            Detail::Sag(d) => d,
+            Detail::Moisture(d) => d,
+            Detail::Damage(d) => d,
+        }
+    }
+}
+
+/// Wording of a finding not checked for want of input (the summary is written from the
+/// finding's reason by `Finding::summary`).
+impl Wording for Detail {
+    fn summary(&self, _: UnitSystem) -> String {
+        String::new()
+    }
+
+    fn recommendation(&self, _: Status, _: UnitSystem) -> String {
+        match self {
+            Detail::Missing(what_to_do) => what_to_do.to_string(),
+            _ => String::new(),
+        }
+    }
+}
 
 /// A rule: its identity and its check.
 pub struct Rule {
-    pub info: RuleInfo,
-    pub check: fn(&MemberContext) -> Vec<Finding>,
+    pub info: &'static RuleInfo,
+    /// Appends this rule's findings for one member.
+    pub check: fn(&MemberContext, &mut Vec<Finding>),
 }
 
 /// Every rule, in report order.
 pub static RULES: &[Rule] = &[
-    Rule { info: joist_span::RULE, check: joist_span::check },
-    Rule { info: span_options::RULE, check: span_options::check },
-    Rule { info: bearing::RULE, check: bearing::check },
-    Rule { info: end_restraint::RULE, check: end_restraint::check },
-    Rule { info: bridging::RULE, check: bridging::check },
-    Rule { info: lap::RULE, check: lap::check },
-    Rule { info: notch::RULE, check: notch::check },
-    Rule { info: bored_hole::RULE, check: bored_hole::check },
-    Rule { info: engineered::CUT_RULE, check: engineered::check_cuts },
-    Rule { info: engineered::HOLE_RULE, check: engineered::check_holes },
-    Rule { info: sag::RULE, check: sag::check },
-    Rule { info: moisture::RULE, check: moisture::check },
-    Rule { info: wood_damage::RULE, check: wood_damage::check },
+    Rule {
+        info: &joist_span::RULE,
+        check: joist_span::check,
+    },
+    Rule {
+        info: &span_options::RULE,
+        check: span_options::check,
+    },
+    Rule {
+        info: &bearing::RULE,
+        check: bearing::check,
+    },
+    Rule {
+        info: &end_restraint::RULE,
+        check: end_restraint::check,
+    },
+    Rule {
+        info: &bridging::RULE,
+        check: bridging::check,
+    },
+    Rule {
+        info: &lap::RULE,
+        check: lap::check,
+    },
+    Rule {
+        info: &notch::RULE,
+        check: notch::check,
+    },
+    Rule {
+        info: &bored_hole::RULE,
+        check: bored_hole::check,
+    },
+    Rule {
+        info: &engineered::CUT_RULE,
+        check: engineered::check_cuts,
+    },
+    Rule {
+        info: &engineered::HOLE_RULE,
+        check: engineered::check_holes,
+    },
+    Rule {
+        info: &sag::RULE,
+        check: sag::check,
+    },
+    Rule {
+        info: &moisture::RULE,
+        check: moisture::check,
+    },
+    Rule {
+        info: &wood_damage::RULE,
+        check: wood_damage::check,
+    },
 ];
 
 /// Looks a rule up by id.
@@ -60,13 +155,20 @@ mod tests {
         for r in RULES {
             assert!(seen.insert(r.info.id), "duplicate id {}", r.info.id);
             assert!(
-                r.info.id.chars().all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '-')
+                r.info
+                    .id
+                    .chars()
+                    .all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '-')
                     && !r.info.id.starts_with('-')
                     && !r.info.id.ends_with('-'),
                 "{} is not kebab-case",
                 r.info.id
             );
-            assert!(r.info.code_section.is_some() || r.info.other_source.is_some(), "{} cites nothing", r.info.id);
+            assert!(
+                r.info.code_section.is_some() || r.info.other_source.is_some(),
+                "{} cites nothing",
+                r.info.id
+            );
         }
     }
 
@@ -74,7 +176,14 @@ mod tests {
     fn rule_list_snapshot() {
         let list: Vec<String> = RULES
             .iter()
-            .map(|r| format!("{:<26} {:<44} {}", r.info.id, r.info.title, r.info.citation("IRC 2018")))
+            .map(|r| {
+                format!(
+                    "{:<26} {:<44} {}",
+                    r.info.id,
+                    r.info.title,
+                    r.info.citation("IRC 2018")
+                )
+            })
             .collect();
         insta::assert_snapshot!(list.join("\n"));
     }

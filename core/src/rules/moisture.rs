@@ -1,9 +1,12 @@
 //! Moisture readings: above 19 % the member is in wet service (and its span is re-checked with
 //! wet-service factors by `joist-span`); near fibre saturation decay can grow.
 
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
+use super::Detail;
+use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
 use crate::model::ObservationKind;
+use crate::units::UnitSystem;
 use crate::validate::{MemberContext, WET_SERVICE_MC_PERCENT};
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "moisture-content",
@@ -17,21 +20,26 @@ pub const RULE: RuleInfo = RuleInfo {
 /// "around 25-30 %").
 const DECAY_RISK_PERCENT: f64 = 25.0;
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    ctx.observations
-        .iter()
-        .filter_map(|o| match &o.kind {
-            ObservationKind::Moisture { percent, location } if percent.is_finite() && (0.0..=100.0).contains(percent) => {
-                Some(one(ctx, &o.id, *percent, location))
-            }
-            _ => None,
-        })
-        .collect()
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
+    out.extend(ctx.observations.iter().filter_map(|o| match &o.kind {
+        ObservationKind::Moisture { percent, location }
+            if percent.is_finite() && (0.0..=100.0).contains(percent) =>
+        {
+            Some(one(ctx, &o.id, *percent, location))
+        }
+        _ => None,
+    }));
 }
 
-fn one(ctx: &MemberContext, id: &str, percent: f64, location: &str) -> Finding {
-    let at = if location.is_empty() { String::new() } else { format!(" at {location}") };
-    FindingBuilder::new(&RULE, ctx.edition, ctx.place(), Some(id))
+/// What a moisture finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct MoistureDetail {
+    pub percent: f64,
+    pub location: String,
+}
+
+fn one(ctx: &MemberContext, id: &Arc<str>, percent: f64, location: &str) -> Finding {
+    FindingBuilder::new(&RULE, ctx, Some(id))
         .check(Check::numeric(
             "moisture content",
             Value::Percent(percent),
@@ -39,16 +47,40 @@ fn one(ctx: &MemberContext, id: &str, percent: f64, location: &str) -> Finding {
             Bound::AtMost,
             ctx.units,
         ))
-        .summary(format!("Moisture content {percent:.0} %{at}; wet service above {WET_SERVICE_MC_PERCENT:.0} %"))
-        .assume("Pin-meter reading as shown, without species or temperature correction")
-        .finish(|status| match status {
-            Status::OverLimit if percent >= DECAY_RISK_PERCENT => format!(
-                "Wet wood ({percent:.0} %): the span was re-checked in wet service, and sustained moisture near {DECAY_RISK_PERCENT:.0} % or more lets decay fungi grow. Find and stop the water source (grading, gutters, plumbing, vapour retarder, ventilation) and probe for decay."
+        .finish(Detail::Moisture(MoistureDetail {
+            percent,
+            location: location.to_string(),
+        }))
+}
+
+impl Wording for MoistureDetail {
+    fn summary(&self, _: UnitSystem) -> String {
+        let at = if self.location.is_empty() {
+            String::new()
+        } else {
+            format!(" at {}", self.location)
+        };
+        format!(
+            "Moisture content {:.0} %{at}; wet service above {WET_SERVICE_MC_PERCENT:.0} %",
+            self.percent
+        )
+    }
+
+    fn assumptions(&self, _: UnitSystem) -> Vec<String> {
+        vec!["Pin-meter reading as shown, without species or temperature correction".into()]
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
+            Status::OverLimit if self.percent >= DECAY_RISK_PERCENT => format!(
+                "Wet wood ({:.0} %): the span was re-checked in wet service, and sustained moisture near {DECAY_RISK_PERCENT:.0} % or more lets decay fungi grow. Find and stop the water source (grading, gutters, plumbing, vapour retarder, ventilation) and probe for decay.",
+                self.percent
             ),
             Status::OverLimit => "Above 19 %: the span was re-checked in wet service. Find and reduce the moisture source and re-measure.".into(),
             Status::NearLimit => "Close to wet service; re-measure in the wet season.".into(),
             _ => "Dry service.".into(),
-        })
+        }
+    }
 }
 
 #[cfg(test)]
@@ -57,18 +89,32 @@ mod tests {
     use crate::rules::testing::*;
 
     fn reading(percent: f64) -> Vec<crate::model::Observation> {
-        vec![observation(ObservationKind::Moisture { percent, location: String::new() })]
+        vec![observation(ObservationKind::Moisture {
+            percent,
+            location: String::new(),
+        })]
     }
 
     // Source: NDS Supplement (2018) Table 4A: wet service above 19 % moisture content.
     #[test]
     fn nineteen_percent() {
-        let table = [(12.0, Status::Within), (17.0, Status::Within), (17.2, Status::NearLimit), (19.0, Status::NearLimit), (19.5, Status::OverLimit), (30.0, Status::OverLimit)];
+        let table = [
+            (12.0, Status::Within),
+            (17.0, Status::Within),
+            (17.2, Status::NearLimit),
+            (19.0, Status::NearLimit),
+            (19.5, Status::OverLimit),
+            (30.0, Status::OverLimit),
+        ];
         for (percent, expect) in table {
-            assert_eq!(status(check, spf_no2((2, 10), 180.0), reading(percent)), expect, "{percent}");
+            assert_eq!(
+                status(check, spf_no2((2, 10), 180.0), reading(percent)),
+                expect,
+                "{percent}"
+            );
         }
         let f = &run(check, spf_no2((2, 10), 180.0), reading(28.0))[0];
-        assert!(f.recommendation.contains("decay"));
+        assert!(f.recommendation().contains("decay"));
     }
 
     #[test]

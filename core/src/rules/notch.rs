@@ -2,11 +2,13 @@
 //! and the tension side of members 4 in nominal or thicker.
 
 use super::shared::{dim, len};
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
+use super::Detail;
+use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
 use crate::geometry::{middle_third, notch_rect};
 use crate::model::{Edge, ObservationKind};
-use crate::units::Length;
+use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "sawn-notch",
@@ -24,72 +26,154 @@ const END_NOTCH_DEPTH: f64 = 1.0 / 4.0;
 const NOTCH_LENGTH: f64 = 1.0 / 3.0;
 const TENSION_SIDE_MIN_THICKNESS: u8 = 4;
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    if ctx.kind.is_engineered() {
-        return vec![];
-    }
-    ctx.observations
-        .iter()
-        .filter(|o| matches!(o.kind, ObservationKind::Notch { .. }))
-        .map(|o| one(ctx, &o.id, &o.kind))
-        .collect()
+/// What a notch finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct NotchDetail {
+    pub at_end: bool,
+    pub edge: Edge,
+    pub depth: Length,
+    pub length: Length,
+    pub from_support: Option<Length>,
+    /// Depth of the member.
+    pub member_depth: Length,
+    pub measured_section: bool,
 }
 
-fn one(ctx: &MemberContext, id: &str, kind: &ObservationKind) -> Finding {
-    let ObservationKind::Notch { edge, depth: notch_depth, length, at_end, from_support, .. } = kind else {
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
+    if ctx.kind.is_engineered() {
+        return;
+    }
+    out.extend(
+        ctx.observations
+            .iter()
+            .filter(|o| matches!(o.kind, ObservationKind::Notch { .. }))
+            .map(|o| one(ctx, &o.id, &o.kind)),
+    );
+}
+
+fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
+    let ObservationKind::Notch {
+        edge,
+        depth: notch_depth,
+        length,
+        at_end,
+        from_support,
+        ..
+    } = kind
+    else {
         unreachable!("filtered to notches")
     };
-    let b = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), Some(id));
+    let mut b = FindingBuilder::new(&RULE, ctx, Some(id));
     let Some(section) = ctx.section else {
-        return b.not_checked("joist size not entered, so its depth is unknown", "Enter the joist size to check the notch.");
+        return b.not_checked(
+            "joist size not entered, so its depth is unknown",
+            Detail::Missing("Enter the joist size to check the notch."),
+        );
     };
     let d = section.depth;
     let u = ctx.units;
-    let edge_name = if *edge == Edge::Top { "top" } else { "bottom" };
-    let mut b = b;
-    let summary;
     if *at_end {
-        b = b.check(Check::numeric("end notch depth", Value::Length(*notch_depth), Value::Length(d * END_NOTCH_DEPTH), Bound::AtMost, u));
-        summary = format!(
-            "Notch at the end, {} deep in the {edge_name} edge of a {} deep joist; limit d/4 = {}",
-            dim(ctx, *notch_depth),
-            dim(ctx, d),
-            dim(ctx, d * END_NOTCH_DEPTH)
-        );
+        b = b.check(Check::numeric(
+            "end notch depth",
+            Value::Length(*notch_depth),
+            Value::Length(d * END_NOTCH_DEPTH),
+            Bound::AtMost,
+            u,
+        ));
     } else {
         b = b
-            .check(Check::numeric("notch depth", Value::Length(*notch_depth), Value::Length(d * SPAN_NOTCH_DEPTH), Bound::AtMost, u))
-            .check(Check::numeric("notch length", Value::Length(*length), Value::Length(d * NOTCH_LENGTH), Bound::AtMost, u))
+            .check(Check::numeric(
+                "notch depth",
+                Value::Length(*notch_depth),
+                Value::Length(d * SPAN_NOTCH_DEPTH),
+                Bound::AtMost,
+                u,
+            ))
+            .check(Check::numeric(
+                "notch length",
+                Value::Length(*length),
+                Value::Length(d * NOTCH_LENGTH),
+                Bound::AtMost,
+                u,
+            ))
             .check(middle_third_check(ctx, kind, d));
         if section.nominal.thickness >= TENSION_SIDE_MIN_THICKNESS {
+            let edge_text = if *edge == Edge::Top {
+                "top edge"
+            } else {
+                "bottom edge, away from the end"
+            };
             b = b.check(Check::qualitative(
                 "tension side",
-                &format!("{edge_name} edge, away from the end"),
+                edge_text,
                 "no notch in the tension (bottom) edge except at the ends",
                 *edge == Edge::Top,
             ));
         }
-        summary = format!(
-            "Notch {} deep x {} long in the {edge_name} edge, {} from the support, in a {} deep joist; limits d/6 = {} deep, d/3 = {} long, outside the middle third",
-            dim(ctx, *notch_depth),
-            dim(ctx, *length),
-            from_support.map_or("?".to_string(), |f| len(ctx, f)),
-            dim(ctx, d),
-            dim(ctx, d * SPAN_NOTCH_DEPTH),
-            dim(ctx, d * NOTCH_LENGTH)
-        );
     }
-    if *notch_depth >= d {
-        b = b.assume("The notch entered is as deep as the joist: check the entry");
+    b.finish(Detail::Notch(NotchDetail {
+        at_end: *at_end,
+        edge: *edge,
+        depth: *notch_depth,
+        length: *length,
+        from_support: *from_support,
+        member_depth: d,
+        measured_section: section.rough_sawn,
+    }))
+}
+
+impl Wording for NotchDetail {
+    fn summary(&self, u: UnitSystem) -> String {
+        let edge = if self.edge == Edge::Top {
+            "top"
+        } else {
+            "bottom"
+        };
+        let d = self.member_depth;
+        if self.at_end {
+            format!(
+                "Notch at the end, {} deep in the {edge} edge of a {} deep joist; limit d/4 = {}",
+                dim(u, self.depth),
+                dim(u, d),
+                dim(u, d * END_NOTCH_DEPTH)
+            )
+        } else {
+            format!(
+                "Notch {} deep x {} long in the {edge} edge, {} from the support, in a {} deep joist; limits d/6 = {} deep, d/3 = {} long, outside the middle third",
+                dim(u, self.depth),
+                dim(u, self.length),
+                self.from_support.map_or("?".to_string(), |f| len(u, f)),
+                dim(u, d),
+                dim(u, d * SPAN_NOTCH_DEPTH),
+                dim(u, d * NOTCH_LENGTH)
+            )
+        }
     }
-    b.summary(summary)
-        .assume(format!("Depth of the member d = {} ({})", dim(ctx, d), if section.rough_sawn { "measured" } else { "dressed size" }))
-        .finish(|status| match status {
+
+    fn assumptions(&self, u: UnitSystem) -> Vec<String> {
+        let mut out = vec![format!(
+            "Depth of the member d = {} ({})",
+            dim(u, self.member_depth),
+            if self.measured_section {
+                "measured"
+            } else {
+                "dressed size"
+            }
+        )];
+        if self.depth >= self.member_depth {
+            out.push("The notch entered is as deep as the joist: check the entry".into());
+        }
+        out
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
             Status::OverLimit => "The notch exceeds the code's limits and weakens the joist. Refer to a licensed professional for a repair design (for example sistering or reinforcement); do not cut further.".into(),
             Status::NearLimit => "The notch is close to the limit; do not enlarge it.".into(),
             Status::NotChecked => "Enter the missing measurements to check the notch.".into(),
             Status::Within => "Within the code's notch limits.".into(),
-        })
+        }
+    }
 }
 
 /// The notch may not reach into the middle third: its farthest point from the nearest support
@@ -100,7 +184,11 @@ fn middle_third_check(ctx: &MemberContext, kind: &ObservationKind, d: Length) ->
         return Check::skipped("position in the span", LIMIT, "clear span not entered");
     };
     let Some(rect) = notch_rect(kind, d, Some(span)) else {
-        return Check::skipped("position in the span", LIMIT, "distance from the support not entered");
+        return Check::skipped(
+            "position in the span",
+            LIMIT,
+            "distance from the support not entered",
+        );
     };
     let (third, _) = middle_third(span);
     let s = span.in_inches();
@@ -110,7 +198,7 @@ fn middle_third_check(ctx: &MemberContext, kind: &ObservationKind, d: Length) ->
         rect.x0.min(s - rect.x0).max(rect.x1.min(s - rect.x1))
     };
     Check::numeric(
-        "reach from the nearest support (middle third starts at L/3)",
+        "reach from the nearest support (the middle third starts at L/3)",
         Value::Length(Length::inches(reach.max(0.0))),
         Value::Length(Length::inches(third)),
         Bound::AtMost,
@@ -124,7 +212,13 @@ mod tests {
     use crate::model::End;
     use crate::rules::testing::*;
 
-    fn notch(depth: f64, length: f64, from: Option<f64>, at_end: bool, edge: Edge) -> Vec<crate::model::Observation> {
+    fn notch(
+        depth: f64,
+        length: f64,
+        from: Option<f64>,
+        at_end: bool,
+        edge: Edge,
+    ) -> Vec<crate::model::Observation> {
         vec![observation(ObservationKind::Notch {
             edge,
             depth: inches(depth),
@@ -155,7 +249,11 @@ mod tests {
             (2.0, 3.0, Some(36.0), false, Status::OverLimit), // the 2 in notch 3 ft out
         ];
         for (depth, length, from, at_end, expect) in table {
-            assert_eq!(status(check, f(), notch(depth, length, from, at_end, Edge::Bottom)), expect, "{depth} x {length} at {from:?}");
+            assert_eq!(
+                status(check, f(), notch(depth, length, from, at_end, Edge::Bottom)),
+                expect,
+                "{depth} x {length} at {from:?}"
+            );
         }
     }
 
@@ -164,15 +262,35 @@ mod tests {
     fn tension_side_of_thick_members() {
         let mut f = spf_no2((4, 10), 180.0);
         f.spacing = Some(inches(48.0));
-        assert_eq!(status(check, f.clone(), notch(1.0, 2.0, Some(24.0), false, Edge::Bottom)), Status::OverLimit);
-        assert_eq!(status(check, f.clone(), notch(1.0, 2.0, Some(24.0), false, Edge::Top)), Status::Within);
-        assert_eq!(status(check, f, notch(1.0, 2.0, None, true, Edge::Bottom)), Status::Within);
+        assert_eq!(
+            status(
+                check,
+                f.clone(),
+                notch(1.0, 2.0, Some(24.0), false, Edge::Bottom)
+            ),
+            Status::OverLimit
+        );
+        assert_eq!(
+            status(
+                check,
+                f.clone(),
+                notch(1.0, 2.0, Some(24.0), false, Edge::Top)
+            ),
+            Status::Within
+        );
+        assert_eq!(
+            status(check, f, notch(1.0, 2.0, None, true, Edge::Bottom)),
+            Status::Within
+        );
     }
 
     #[test]
     fn unknown_size_is_not_checked() {
         let mut f = spf_no2((2, 10), 180.0);
         f.size = None;
-        assert_eq!(status(check, f, notch(1.0, 2.0, Some(24.0), false, Edge::Top)), Status::NotChecked);
+        assert_eq!(
+            status(check, f, notch(1.0, 2.0, Some(24.0), false, Edge::Top)),
+            Status::NotChecked
+        );
     }
 }

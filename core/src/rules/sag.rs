@@ -2,10 +2,12 @@
 //! IRC Table R301.7, worded for what it is: a reference, not a limit on long-term sag.
 
 use super::shared::{dim, len};
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value};
+use super::Detail;
+use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
 use crate::model::{ObservationKind, SagReading};
-use crate::units::Length;
+use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
+use std::sync::Arc;
 
 pub const RULE: RuleInfo = RuleInfo {
     id: "sag-reading",
@@ -32,58 +34,115 @@ pub fn sag_of(reading: &SagReading, spacer: Option<Length>) -> Length {
 }
 
 /// The largest sag among readings inside the span.
-pub fn summarize(readings: &[SagReading], spacer: Option<Length>, span: Length) -> Option<SagSummary> {
+pub fn summarize(
+    readings: &[SagReading],
+    spacer: Option<Length>,
+    span: Length,
+) -> Option<SagSummary> {
     readings
         .iter()
         .filter(|r| r.at <= span)
         .map(|r| (sag_of(r, spacer), r.at))
         .max_by(|a, b| a.0.in_inches().total_cmp(&b.0.in_inches()))
-        .map(|(largest, at)| SagSummary { largest, at, span_over_sag: span / largest })
-}
-
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
-    ctx.observations
-        .iter()
-        .filter_map(|o| match &o.kind {
-            ObservationKind::Sag { readings, spacer } => Some(one(ctx, &o.id, readings, *spacer)),
-            _ => None,
+        .map(|(largest, at)| SagSummary {
+            largest,
+            at,
+            span_over_sag: span / largest,
         })
-        .collect()
 }
 
-fn one(ctx: &MemberContext, id: &str, readings: &[SagReading], spacer: Option<Length>) -> Finding {
-    let b = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), Some(id));
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
+    out.extend(ctx.observations.iter().filter_map(|o| match &o.kind {
+        ObservationKind::Sag { readings, spacer } => Some(one(ctx, &o.id, readings, *spacer)),
+        _ => None,
+    }));
+}
+
+/// What a sag finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SagDetail {
+    pub sag: SagSummary,
+    pub span: Length,
+    /// The n of the L/n reference.
+    pub denominator: f64,
+    pub readings: usize,
+    /// Readings beyond the clear span, left out.
+    pub outside: usize,
+}
+
+fn one(ctx: &MemberContext, id: &Arc<str>, readings: &[SagReading], spacer: Option<Length>) -> Finding {
+    let b = FindingBuilder::new(&RULE, ctx, Some(id));
     let Some(span) = ctx.clear_span() else {
-        return b.not_checked("clear span not entered", "Enter the clear span to compare the sag with L/360.");
+        return b.not_checked(
+            "clear span not entered",
+            Detail::Missing("Enter the clear span to compare the sag with L/360."),
+        );
     };
-    let outside = readings.iter().filter(|r| r.at > span).count();
     let Some(sag) = summarize(readings, spacer, span) else {
-        return b.not_checked("no sag readings inside the span", "Read offsets from the line at several points, including mid-span.");
+        return b.not_checked(
+            "no sag readings inside the span",
+            Detail::Missing("Read offsets from the line at several points, including mid-span."),
+        );
     };
-    let n = ctx.loads.deflection_denominator;
-    let reference = span / n;
-    let ratio_text = if sag.span_over_sag.is_finite() { format!("L/{:.0}", sag.span_over_sag) } else { "no sag".into() };
-    let mut b = b
-        .check(Check::numeric("largest sag", Value::Length(sag.largest), Value::Length(reference), Bound::AtMost, ctx.units))
-        .summary(format!(
-            "Largest sag {} at {} from support A ({ratio_text}) against the L/{n:.0} reference of {} for a {} span",
-            dim(ctx, sag.largest),
-            len(ctx, sag.at),
-            dim(ctx, reference),
-            len(ctx, span)
-        ))
-        .assume(format!(
-            "L/{n:.0} in Table R301.7 limits the calculated deflection under live load; a measured sag also holds creep, shrinkage and how the joist was installed, so this comparison is a reference, not a code violation"
-        ))
-        .assume(format!("{} reading(s) along a line stretched between the bearings", readings.len()));
-    if outside > 0 {
-        b = b.assume(format!("{outside} reading(s) beyond the clear span were left out"));
+    let denominator = ctx.loads.deflection_denominator;
+    let detail = SagDetail {
+        sag,
+        span,
+        denominator,
+        readings: readings.len(),
+        outside: readings.iter().filter(|r| r.at > span).count(),
+    };
+    b.check(Check::numeric(
+        "largest sag",
+        Value::Length(sag.largest),
+        Value::Length(span / denominator),
+        Bound::AtMost,
+        ctx.units,
+    ))
+    .finish(Detail::Sag(detail))
+}
+
+impl Wording for SagDetail {
+    fn summary(&self, u: UnitSystem) -> String {
+        let ratio = if self.sag.span_over_sag.is_finite() {
+            format!("L/{:.0}", self.sag.span_over_sag)
+        } else {
+            "no sag".into()
+        };
+        format!(
+            "Largest sag {} at {} from support A ({ratio}) against the L/{:.0} reference of {} for a {} span",
+            dim(u, self.sag.largest),
+            len(u, self.sag.at),
+            self.denominator,
+            dim(u, self.span / self.denominator),
+            len(u, self.span)
+        )
     }
-    b.finish(|status| match status {
-        Status::OverLimit => "The sag is more than the L/360 reference. Long-term sag can come from over-span, notching, decay, added load or a removed support: have the cause evaluated by a licensed professional before any jacking or repair.".into(),
-        Status::NearLimit => "The sag is close to the L/360 reference; re-measure over time to see whether it is growing.".into(),
-        _ => "The sag is small compared with the L/360 reference.".into(),
-    })
+
+    fn assumptions(&self, _: UnitSystem) -> Vec<String> {
+        let mut out = vec![
+            format!(
+                "L/{:.0} in Table R301.7 limits the calculated deflection under live load; a measured sag also holds creep, shrinkage and how the joist was installed, so this comparison is a reference, not a code violation",
+                self.denominator
+            ),
+            format!("{} reading(s) along a line stretched between the bearings", self.readings),
+        ];
+        if self.outside > 0 {
+            out.push(format!(
+                "{} reading(s) beyond the clear span were left out",
+                self.outside
+            ));
+        }
+        out
+    }
+
+    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+        match status {
+            Status::OverLimit => "The sag is more than the L/360 reference. Long-term sag can come from over-span, notching, decay, added load or a removed support: have the cause evaluated by a licensed professional before any jacking or repair.".into(),
+            Status::NearLimit => "The sag is close to the L/360 reference; re-measure over time to see whether it is growing.".into(),
+            _ => "The sag is small compared with the L/360 reference.".into(),
+        }
+    }
 }
 
 #[cfg(test)]
@@ -92,36 +151,78 @@ mod tests {
     use crate::rules::testing::*;
 
     fn readings(offsets: &[(f64, f64)]) -> Vec<crate::model::Observation> {
-        let readings = offsets.iter().map(|&(at, offset)| SagReading { at: inches(at), offset: inches(offset) }).collect();
-        vec![observation(ObservationKind::Sag { readings, spacer: None })]
+        let readings = offsets
+            .iter()
+            .map(|&(at, offset)| SagReading {
+                at: inches(at),
+                offset: inches(offset),
+            })
+            .collect();
+        vec![observation(ObservationKind::Sag {
+            readings,
+            spacer: None,
+        })]
     }
 
     // Source: IRC 2018 Table R301.7, floors L/360. A 180 in span: L/360 = 0.5 in.
     #[test]
     fn against_l_over_360() {
-        let table = [(0.25, Status::Within), (0.45, Status::NearLimit), (0.5, Status::NearLimit), (0.5625, Status::OverLimit)];
+        let table = [
+            (0.25, Status::Within),
+            (0.45, Status::NearLimit),
+            (0.5, Status::NearLimit),
+            (0.5625, Status::OverLimit),
+        ];
         for (offset, expect) in table {
             let obs = readings(&[(45.0, offset / 2.0), (90.0, offset), (135.0, offset / 3.0)]);
-            assert_eq!(status(check, spf_no2((2, 10), 180.0), obs), expect, "{offset}");
+            assert_eq!(
+                status(check, spf_no2((2, 10), 180.0), obs),
+                expect,
+                "{offset}"
+            );
         }
     }
 
     #[test]
     fn largest_and_ratio() {
-        let r = [SagReading { at: inches(60.0), offset: inches(0.25) }, SagReading { at: inches(90.0), offset: inches(0.75) }];
+        let r = [
+            SagReading {
+                at: inches(60.0),
+                offset: inches(0.25),
+            },
+            SagReading {
+                at: inches(90.0),
+                offset: inches(0.75),
+            },
+        ];
         let s = summarize(&r, None, inches(180.0)).unwrap();
-        assert_eq!((s.largest, s.at, s.span_over_sag), (inches(0.75), inches(90.0), 240.0));
+        assert_eq!(
+            (s.largest, s.at, s.span_over_sag),
+            (inches(0.75), inches(90.0), 240.0)
+        );
         // Spacer blocks of 1-1/2 in: a gap of 3/4 in read at mid-span is 3/4 in of sag.
-        let gap = [SagReading { at: inches(90.0), offset: inches(0.75) }];
-        assert_eq!(summarize(&gap, Some(inches(1.5)), inches(180.0)).unwrap().largest, inches(0.75));
+        let gap = [SagReading {
+            at: inches(90.0),
+            offset: inches(0.75),
+        }];
+        assert_eq!(
+            summarize(&gap, Some(inches(1.5)), inches(180.0))
+                .unwrap()
+                .largest,
+            inches(0.75)
+        );
         let f = &run(check, spf_no2((2, 10), 180.0), readings(&[(90.0, 0.75)]))[0];
-        assert!(f.summary.contains("L/240"), "{}", f.summary);
+        assert!(f.summary().contains("L/240"), "{}", f.summary());
     }
 
     #[test]
     fn readings_past_the_span_are_dropped_and_said() {
-        let f = &run(check, spf_no2((2, 10), 180.0), readings(&[(90.0, 0.25), (400.0, 3.0)]))[0];
+        let f = &run(
+            check,
+            spf_no2((2, 10), 180.0),
+            readings(&[(90.0, 0.25), (400.0, 3.0)]),
+        )[0];
         assert_eq!(f.status, Status::Within);
-        assert!(f.assumptions.iter().any(|a| a.contains("left out")));
+        assert!(f.assumptions().iter().any(|a| a.contains("left out")));
     }
 }

@@ -2,10 +2,11 @@
 //! support would have to go, the smallest standard size, the widest standard spacing.
 
 use super::shared::len;
-use crate::finding::{Finding, FindingBuilder, RuleInfo, Status};
-use crate::lumber::NominalSize;
+use super::Detail;
+use crate::finding::{Finding, FindingBuilder, RuleInfo, Status, Wording};
+use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::mechanics::{allowable_span, SpanInput};
-use crate::units::Length;
+use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
 
 pub const RULE: RuleInfo = RuleInfo {
@@ -32,7 +33,12 @@ pub struct SpanOptions {
 
 /// Computes the options for a sawn member whose clear span is over its allowable span.
 pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
-    let (result, span, lumber, spacing) = (ctx.span.as_ref()?, ctx.clear_span()?, ctx.lumber.as_ref()?, ctx.framing.spacing?);
+    let (result, span, lumber, spacing) = (
+        ctx.span.as_ref()?,
+        ctx.clear_span()?,
+        ctx.lumber.as_ref()?,
+        ctx.framing.spacing?,
+    );
     let longest = result.allowable_rounded();
     if span <= longest {
         return None;
@@ -50,61 +56,107 @@ pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
         duration: Default::default(),
         repetitive: true,
     };
-    let passes = |input: &SpanInput| allowable_span(input).map(|r| r.allowable_rounded()).filter(|a| span <= *a);
+    let passes = |input: &SpanInput| {
+        allowable_span(input)
+            .map(|r| r.allowable_rounded())
+            .filter(|a| span <= *a)
+    };
     let smallest_size = NominalSize::all_standard_depths(lumber.section.nominal.thickness)
         .filter(|n| n.depth > lumber.section.nominal.depth)
-        .find_map(|n| passes(&SpanInput { section: n.dressed_section(), ..base.clone() }).map(|a| (n, a)));
-    let widest_spacing = STANDARD_SPACINGS
-        .into_iter()
-        .find_map(|s| passes(&SpanInput { spacing: Length::inches(s), ..base.clone() }).map(|a| (s, a)));
-    Some(SpanOptions { longest_passing: longest, support_zone, smallest_size, widest_spacing })
+        .find_map(|n| {
+            passes(&SpanInput {
+                section: n.dressed_section(),
+                ..base.clone()
+            })
+            .map(|a| (n, a))
+        });
+    let widest_spacing = STANDARD_SPACINGS.into_iter().find_map(|s| {
+        passes(&SpanInput {
+            spacing: Length::inches(s),
+            ..base.clone()
+        })
+        .map(|a| (s, a))
+    });
+    Some(SpanOptions {
+        longest_passing: longest,
+        support_zone,
+        smallest_size,
+        widest_spacing,
+    })
 }
 
-pub fn check(ctx: &MemberContext) -> Vec<Finding> {
+/// What an options finding is worded from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct OptionsDetail {
+    pub span: Length,
+    pub nominal: NominalSize,
+    pub species: Species,
+    pub grade: GradeChoice,
+    pub options: SpanOptions,
+}
+
+pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     if !ctx.report_span || ctx.kind.is_engineered() {
-        return vec![];
+        return;
     }
-    let Some(o) = options(ctx) else { return vec![] };
-    let lumber = ctx.lumber.as_ref().expect("options need lumber");
-    let mut lines = Vec::new();
-    lines.push(match o.support_zone {
-        Some((from, to)) => format!(
-            "A beam or wall across the joists anywhere from {} to {} from support A would leave both spans within {}",
-            len(ctx, from),
-            len(ctx, to),
-            len(ctx, o.longest_passing)
-        ),
-        None => format!("Supports at most {} apart would be needed (more than one)", len(ctx, o.longest_passing)),
-    });
-    lines.push(match o.smallest_size {
-        Some((size, allowable)) => format!(
-            "{size} {}, {}, at the same spacing allows {}",
-            lumber.species.name(),
-            lumber.grade,
-            len(ctx, allowable)
-        ),
-        None => format!("No {}x size up to {}x14 at this spacing reaches the span", lumber.section.nominal.thickness, lumber.section.nominal.thickness),
-    });
-    lines.push(match o.widest_spacing {
-        Some((spacing, allowable)) => format!("{} at {spacing} in on centre allows {}", lumber.section.nominal, len(ctx, allowable)),
-        None => format!("No standard spacing (12 to 24 in) of {} reaches the span", lumber.section.nominal),
-    });
-    let mut builder = FindingBuilder::new(&RULE, ctx.edition, ctx.place(), None).summary(format!(
-        "Options to discuss for a clear span of {} where {} is allowed",
-        len(ctx, ctx.clear_span().unwrap_or_default()),
-        len(ctx, o.longest_passing)
+    let (Some(o), Some(lumber), Some(span)) = (options(ctx), &ctx.lumber, ctx.clear_span()) else {
+        return;
+    };
+    let detail = OptionsDetail {
+        span,
+        nominal: lumber.section.nominal,
+        species: lumber.species,
+        grade: lumber.grade,
+        options: o,
+    };
+    out.push(FindingBuilder::new(&RULE, ctx, None).not_checked(
+        "options to discuss for the over-span above, computed, not prescribed",
+        Detail::SpanOptions(detail),
     ));
-    for line in lines {
-        builder = builder.option(line);
+}
+
+impl Wording for OptionsDetail {
+    fn summary(&self, u: UnitSystem) -> String {
+        format!(
+            "Options to discuss for a clear span of {} where {} is allowed",
+            len(u, self.span),
+            len(u, self.options.longest_passing)
+        )
     }
-    let finding = builder
-        .assume("Same species, grade and loads; each option computed as a simple span. A joist continuous over a new support behaves differently: the design is for a licensed professional.")
-        .not_checked(
-            "options to discuss for the over-span above, computed, not prescribed",
-            "Discuss these options with a licensed professional, who designs the repair.",
-        );
-    debug_assert_eq!(finding.status, Status::NotChecked);
-    vec![finding]
+
+    fn options(&self, u: UnitSystem) -> Vec<String> {
+        let o = &self.options;
+        let thickness = self.nominal.thickness;
+        vec![
+            match o.support_zone {
+                Some((from, to)) => format!(
+                    "A beam or wall across the joists anywhere from {} to {} from support A would leave both spans within {}",
+                    len(u, from),
+                    len(u, to),
+                    len(u, o.longest_passing)
+                ),
+                None => format!("Supports at most {} apart would be needed (more than one)", len(u, o.longest_passing)),
+            },
+            match o.smallest_size {
+                Some((size, allowable)) => {
+                    format!("{size} {}, {}, at the same spacing allows {}", self.species.name(), self.grade, len(u, allowable))
+                }
+                None => format!("No {thickness}x size up to {thickness}x14 at this spacing reaches the span"),
+            },
+            match o.widest_spacing {
+                Some((spacing, allowable)) => format!("{} at {spacing} in on centre allows {}", self.nominal, len(u, allowable)),
+                None => format!("No standard spacing (12 to 24 in) of {} reaches the span", self.nominal),
+            },
+        ]
+    }
+
+    fn assumptions(&self, _: UnitSystem) -> Vec<String> {
+        vec!["Same species, grade and loads; each option computed as a simple span. A joist continuous over a new support behaves differently: the design is for a licensed professional.".into()]
+    }
+
+    fn recommendation(&self, _: Status, _: UnitSystem) -> String {
+        "Discuss these options with a licensed professional, who designs the repair.".into()
+    }
 }
 
 #[cfg(test)]
@@ -132,13 +184,18 @@ mod tests {
         assert!(run(check, spf_no2((2, 10), 180.0), vec![]).is_empty());
         let f = run(check, spf_no2((2, 10), 192.0), vec![]);
         assert_eq!(f.len(), 1);
-        assert!(f[0].options[1].starts_with("2x12"), "{:?}", f[0].options);
+        assert!(
+            f[0].options()[1].starts_with("2x12"),
+            "{:?}",
+            f[0].options()
+        );
     }
 
     #[test]
     fn very_long_spans_need_several_supports() {
         let f = run(check, spf_no2((2, 10), 400.0), vec![]);
-        assert!(f[0].options[0].contains("more than one"), "{:?}", f[0].options);
-        assert!(f[0].options[1].contains("No 2x size"), "{:?}", f[0].options);
+        let options = f[0].options();
+        assert!(options[0].contains("more than one"), "{options:?}");
+        assert!(options[1].contains("No 2x size"), "{options:?}");
     }
 }

@@ -2,7 +2,9 @@
 
 use crate::finding::{Finding, Status};
 use crate::lumber::{GradeChoice, NominalSize, Species};
-use crate::model::{Area, AreaKind, Framing, Inspection, LoadSettings, Member, Observation, ObservationKind};
+use crate::model::{
+    Area, AreaKind, Framing, Inspection, LoadSettings, Member, Observation, ObservationKind,
+};
 use crate::units::Length;
 use crate::validate::{members, MemberContext};
 
@@ -23,10 +25,18 @@ pub fn spf_no2(size: (u8, u8), span_in: f64) -> Framing {
 }
 
 pub fn observation(kind: ObservationKind) -> Observation {
-    Observation { id: "o1".into(), kind, note: String::new() }
+    Observation {
+        id: "o1".into(),
+        kind,
+        note: String::new(),
+    }
 }
 
-pub fn inspection(framing: Framing, observations: Vec<Observation>, loads: LoadSettings) -> Inspection {
+pub fn inspection(
+    framing: Framing,
+    observations: Vec<Observation>,
+    loads: LoadSettings,
+) -> Inspection {
     Inspection {
         format: crate::model::FORMAT_NAME.into(),
         version: crate::model::FORMAT_VERSION,
@@ -46,7 +56,12 @@ pub fn inspection(framing: Framing, observations: Vec<Observation>, loads: LoadS
             kind: AreaKind::Crawlspace,
             loads: LoadSettings::default(),
             runs: vec![],
-            members: vec![Member { id: "m".into(), label: "Joist".into(), framing, observations }],
+            members: vec![Member {
+                id: "m".into(),
+                label: "Joist".into(),
+                framing,
+                observations,
+            }],
             notes: String::new(),
         }],
         photos: vec![],
@@ -54,14 +69,24 @@ pub fn inspection(framing: Framing, observations: Vec<Observation>, loads: LoadS
 }
 
 /// Runs `rule` on the single member and returns its findings.
-pub fn run(rule: fn(&MemberContext) -> Vec<Finding>, framing: Framing, observations: Vec<Observation>) -> Vec<Finding> {
+pub fn run(
+    rule: fn(&MemberContext, &mut Vec<Finding>),
+    framing: Framing,
+    observations: Vec<Observation>,
+) -> Vec<Finding> {
     let inspection = inspection(framing, observations, LoadSettings::default());
     let (ctxs, _) = members(&inspection);
-    rule(&ctxs[0])
+    let mut out = Vec::new();
+    rule(&ctxs[0], &mut out);
+    out
 }
 
 /// The status of the only finding `rule` gives.
-pub fn status(rule: fn(&MemberContext) -> Vec<Finding>, framing: Framing, observations: Vec<Observation>) -> Status {
+pub fn status(
+    rule: fn(&MemberContext, &mut Vec<Finding>),
+    framing: Framing,
+    observations: Vec<Observation>,
+) -> Status {
     let findings = run(rule, framing, observations);
     assert_eq!(findings.len(), 1, "{findings:#?}");
     findings[0].status

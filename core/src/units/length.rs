@@ -24,10 +24,18 @@ impl<'de> Deserialize<'de> for Length {
             Text(String),
         }
         use serde::de::Error;
-        match Written::deserialize(d).map_err(|_| D::Error::custom("expected a length: inches as a number, or text such as \"13' 7-1/2\\\"\""))? {
+        match Written::deserialize(d).map_err(|_| {
+            D::Error::custom(
+                "expected a length: inches as a number, or text such as \"13' 7-1/2\\\"\"",
+            )
+        })? {
             Written::Inches(v) if v.is_finite() && (0.0..=12_000.0).contains(&v) => Ok(Length(v)),
-            Written::Inches(v) => Err(D::Error::custom(format!("{v} in is not a usable length (0 to 12000 in)"))),
-            Written::Text(t) => super::parse_length(&t, None).map_err(|e| D::Error::custom(format!("\"{t}\": {e}"))),
+            Written::Inches(v) => Err(D::Error::custom(format!(
+                "{v} in is not a usable length (0 to 12000 in)"
+            ))),
+            Written::Text(t) => {
+                super::parse_length(&t, None).map_err(|e| D::Error::custom(format!("\"{t}\": {e}")))
+            }
         }
     }
 }

@@ -77,12 +77,27 @@ mod tests {
             (9.25, "9-1/4\""),
         ];
         for (inches, text) in table {
-            assert_eq!(format_length(Length::inches(*inches), UnitSystem::Imperial), *text);
+            assert_eq!(
+                format_length(Length::inches(*inches), UnitSystem::Imperial),
+                *text
+            );
         }
-        assert_eq!(format_length(Length::millimetres(4150.0), UnitSystem::Metric), "4150 mm");
-        assert_eq!(format_dimension(Length::inches(14.0), UnitSystem::Imperial), "14\"");
-        assert_eq!(format_dimension(Length::inches(19.2), UnitSystem::Imperial), "19-3/16\"");
-        assert_eq!(format_dimension(Length::inches(0.4375), UnitSystem::Imperial), "7/16\"");
+        assert_eq!(
+            format_length(Length::millimetres(4150.0), UnitSystem::Metric),
+            "4150 mm"
+        );
+        assert_eq!(
+            format_dimension(Length::inches(14.0), UnitSystem::Imperial),
+            "14\""
+        );
+        assert_eq!(
+            format_dimension(Length::inches(19.2), UnitSystem::Imperial),
+            "19-3/16\""
+        );
+        assert_eq!(
+            format_dimension(Length::inches(0.4375), UnitSystem::Imperial),
+            "7/16\""
+        );
     }
 
     proptest! {

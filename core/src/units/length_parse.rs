@@ -25,7 +25,9 @@ pub enum LengthError {
     NoUnit,
     #[error("the inches after the feet must be under 12 (got {0})")]
     InchesOverTwelve(String),
-    #[error("fraction {0} is not valid: the bottom must be a whole number above 0 and above the top")]
+    #[error(
+        "fraction {0} is not valid: the bottom must be a whole number above 0 and above the top"
+    )]
     BadFraction(String),
     #[error("{0} is larger than 1000 ft")]
     TooLarge(String),
@@ -50,7 +52,12 @@ pub fn parse_length(text: &str, bare_unit_inches: Option<f64>) -> Result<Length,
         return Err(LengthError::Negative);
     }
     let tokens = tokenize(trimmed)?;
-    let inches = Parser { tokens: &tokens, at: 0, bare_unit_inches }.length()?;
+    let inches = Parser {
+        tokens: &tokens,
+        at: 0,
+        bare_unit_inches,
+    }
+    .length()?;
     if !inches.is_finite() || inches > MAX_INCHES {
         return Err(LengthError::TooLarge(trimmed.to_string()));
     }
@@ -114,7 +121,9 @@ fn tokenize(text: &str) -> Result<Vec<Token>, LengthError> {
                 let whole = format!("{number}/{bottom}");
                 let top_ok = !number.contains('.');
                 match bottom.parse::<u32>() {
-                    Ok(b) if b > 0 && top_ok => tokens.push(Token::Fraction(value / b as f64, whole)),
+                    Ok(b) if b > 0 && top_ok => {
+                        tokens.push(Token::Fraction(value / b as f64, whole))
+                    }
                     _ => return Err(LengthError::BadFraction(whole)),
                 }
             } else {
@@ -197,7 +206,11 @@ impl Parser<'_> {
                 if self.peek() == Some(&Token::Dash) {
                     self.at += 1;
                 }
-                let inches = if self.peek().is_some() { self.inches_after_feet()? } else { 0.0 };
+                let inches = if self.peek().is_some() {
+                    self.inches_after_feet()?
+                } else {
+                    0.0
+                };
                 (feet * 12.0 + inches, true)
             }
             (Some(Token::Number(feet, _)), Some(Token::Dash))
@@ -278,7 +291,9 @@ mod tests {
     use super::*;
 
     fn inches(text: &str) -> f64 {
-        parse_length(text, None).unwrap_or_else(|e| panic!("{text:?}: {e}")).in_inches()
+        parse_length(text, None)
+            .unwrap_or_else(|e| panic!("{text:?}: {e}"))
+            .in_inches()
     }
 
     // Common practice, no source: how tapes and framing plans write lengths.
@@ -306,7 +321,11 @@ mod tests {
             (".5\"", 0.5),
         ];
         for (text, expect) in table {
-            assert!((inches(text) - expect).abs() < 1e-9, "{text}: {} != {expect}", inches(text));
+            assert!(
+                (inches(text) - expect).abs() < 1e-9,
+                "{text}: {} != {expect}",
+                inches(text)
+            );
         }
     }
 
@@ -339,12 +358,18 @@ mod tests {
             ("99999999 ft", LengthError::TooLarge("99999999 ft".into())),
             ("4 furlongs", LengthError::Unexpected("furlongs".into())),
             ("長さ", LengthError::Unexpected("長さ".into())),
-            ("13 ft 4 mm", LengthError::Unexpected("a metric unit here".into())),
+            (
+                "13 ft 4 mm",
+                LengthError::Unexpected("a metric unit here".into()),
+            ),
         ];
         for (text, expect) in table {
             assert_eq!(parse_length(text, None).as_ref(), Err(expect), "{text:?}");
         }
-        assert_eq!(parse_length(&"9".repeat(10_000), None), Err(LengthError::TooLong(10_000)));
+        assert_eq!(
+            parse_length(&"9".repeat(10_000), None),
+            Err(LengthError::TooLong(10_000))
+        );
     }
 
     #[test]

@@ -4,8 +4,8 @@ use anyhow::Context;
 use clap::Args;
 use serde_json::json;
 use std::path::PathBuf;
-use undercroft_core::interchange::from_json_bytes;
 use undercroft_core::finding::Bound;
+use undercroft_core::interchange::from_json_bytes;
 use undercroft_core::{evaluate, Finding, Inspection, Status, SCREENING_NOTICE};
 
 #[derive(Args)]
@@ -18,8 +18,10 @@ pub struct CheckArgs {
 }
 
 pub fn run(args: &CheckArgs) -> anyhow::Result<()> {
-    let bytes = std::fs::read(&args.file).with_context(|| format!("cannot read {}", args.file.display()))?;
-    let inspection = from_json_bytes(&bytes).with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
+    let bytes = std::fs::read(&args.file)
+        .with_context(|| format!("cannot read {}", args.file.display()))?;
+    let inspection = from_json_bytes(&bytes)
+        .with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
     let evaluation = evaluate(&inspection);
     if args.json {
         let out = json!({
@@ -49,13 +51,23 @@ pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evalua
         out.push_str(&text);
         out.push('\n');
     };
-    line(&mut out, format!("{} - inspected {}", inspection.property.address, inspection.date));
+    line(
+        &mut out,
+        format!(
+            "{} - inspected {}",
+            inspection.property.address, inspection.date
+        ),
+    );
     line(
         &mut out,
         format!(
             "Code edition: {}{}",
             inspection.code_edition,
-            if inspection.local_amendments.is_empty() { String::new() } else { format!(" (local amendments: {})", inspection.local_amendments) }
+            if inspection.local_amendments.is_empty() {
+                String::new()
+            } else {
+                format!(" (local amendments: {})", inspection.local_amendments)
+            }
         ),
     );
     line(
@@ -83,28 +95,43 @@ pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evalua
 }
 
 fn finding_text(out: &mut String, f: &Finding) {
-    let share = f.use_text().map(|u| format!(" {u} of limit")).unwrap_or_default();
-    out.push_str(&format!("[{}{share}] {} - {}\n", f.status.label(), f.rule_id, f.place.location));
-    out.push_str(&format!("  {}\n", f.summary));
-    if let (Some(m), Some(l)) = (&f.measured, &f.limit) {
-        let what = f.governing_check.as_deref().unwrap_or("measured");
-        let bound = match f.bound {
-            Some(Bound::AtLeast) => "at least ",
-            Some(Bound::AtMost) => "at most ",
-            None => "",
+    let share = f
+        .use_text()
+        .map(|u| format!(" {u} of limit"))
+        .unwrap_or_default();
+    let summary = f.summary();
+    out.push_str(&format!(
+        "[{}{share}] {} - {}\n",
+        f.status.label(),
+        f.rule_id(),
+        f.place.location
+    ));
+    out.push_str(&format!("  {summary}\n"));
+    if let Some(g) = f.governing_check() {
+        let bound = match (g.bound, g.ratio) {
+            (_, None) => "",
+            (Bound::AtLeast, Some(_)) => "at least ",
+            (Bound::AtMost, Some(_)) => "at most ",
         };
-        out.push_str(&format!("  {what}: {}; limit {bound}{}\n", m.text, l.text));
+        out.push_str(&format!(
+            "  {}: {}; limit {bound}{}\n",
+            g.what,
+            g.measured_shown().text,
+            g.limit_shown().text
+        ));
     }
-    for option in &f.options {
+    for option in f.options() {
         out.push_str(&format!("  option: {option}\n"));
     }
     match &f.not_checked_because {
-        Some(why) if !f.summary.starts_with("Not checked") => out.push_str(&format!("  not checked: {why}\n")),
+        Some(why) if !summary.starts_with("Not checked") => {
+            out.push_str(&format!("  not checked: {why}\n"))
+        }
         _ => {}
     }
-    out.push_str(&format!("  cites {}\n", f.citation));
-    for a in &f.assumptions {
+    out.push_str(&format!("  cites {}\n", f.citation()));
+    for a in f.assumptions() {
         out.push_str(&format!("  assumes: {a}\n"));
     }
-    out.push_str(&format!("  -> {}\n\n", f.recommendation));
+    out.push_str(&format!("  -> {}\n\n", f.recommendation()));
 }

@@ -9,7 +9,11 @@ use clap::{Parser, Subcommand};
 use std::process::ExitCode;
 
 #[derive(Parser)]
-#[command(name = "undercroft", version, about = "Checks wood floor framing against the residential code and wood mechanics (a screening tool)")]
+#[command(
+    name = "undercroft",
+    version,
+    about = "Checks wood floor framing against the residential code and wood mechanics (a screening tool)"
+)]
 struct Cli {
     #[command(subcommand)]
     command: Command,

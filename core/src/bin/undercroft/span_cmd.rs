@@ -3,7 +3,9 @@
 use anyhow::{bail, Context};
 use clap::Args;
 use serde_json::json;
-use undercroft_core::lumber::{GradeChoice, LoadDuration, NominalSize, Section, Species, UNKNOWN_GRADE_DEFAULT};
+use undercroft_core::lumber::{
+    GradeChoice, LoadDuration, NominalSize, Section, Species, UNKNOWN_GRADE_DEFAULT,
+};
 use undercroft_core::mechanics::{allowable_span, SpanInput};
 use undercroft_core::units::{format_length, parse_length, Length, Psf, UnitSystem};
 use undercroft_core::SCREENING_NOTICE;
@@ -20,16 +22,16 @@ pub struct SpanArgs {
     #[arg(long)]
     size: Option<NominalSize>,
     /// On-centre spacing; inches unless a unit is typed (16, 19.2, 24, 400mm).
-    #[arg(long)]
+    #[arg(long, allow_hyphen_values = true)]
     spacing: String,
     /// Live load, psf (30 sleeping rooms, 40 other rooms: IRC Table R301.5).
-    #[arg(long, default_value_t = 40.0)]
+    #[arg(long, default_value_t = 40.0, allow_negative_numbers = true)]
     live: f64,
     /// Dead load, psf (10, or 20 with heavy finishes).
-    #[arg(long, default_value_t = 10.0)]
+    #[arg(long, default_value_t = 10.0, allow_negative_numbers = true)]
     dead: f64,
     /// Live-load deflection limit L/n (360 for floors: IRC Table R301.7).
-    #[arg(long, default_value_t = 360.0)]
+    #[arg(long, default_value_t = 360.0, allow_negative_numbers = true)]
     deflection: f64,
     /// Wet service (moisture content above 19 %).
     #[arg(long)]
@@ -43,12 +45,16 @@ pub struct SpanArgs {
 }
 
 pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
-    let spacing = parse_length(&args.spacing, Some(1.0)).with_context(|| format!("--spacing {:?}", args.spacing))?;
+    let spacing = parse_length(&args.spacing, Some(1.0))
+        .with_context(|| format!("--spacing {:?}", args.spacing))?;
     if !(4.0..=48.0).contains(&spacing.in_inches()) {
         bail!("--spacing {} in: expected 4 to 48 in", spacing.in_inches());
     }
     if !(args.live.is_finite() && args.live > 0.0 && args.live <= 500.0) {
-        bail!("--live {}: expected more than 0 and at most 500 psf", args.live);
+        bail!(
+            "--live {}: expected more than 0 and at most 500 psf",
+            args.live
+        );
     }
     if !(args.dead.is_finite() && args.dead >= 0.0 && args.dead <= 500.0) {
         bail!("--dead {}: expected 0 to 500 psf", args.dead);
@@ -74,7 +80,12 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
         repetitive: true,
     };
     let Some(r) = allowable_span(&input) else {
-        bail!("no design values for {} {} {}", args.species.name(), args.grade, section.nominal);
+        bail!(
+            "no design values for {} {} {}",
+            args.species.name(),
+            args.grade,
+            section.nominal
+        );
     };
     let ftin = |inches: f64| format_length(Length::inches(inches), UnitSystem::Imperial);
     if args.json {
@@ -111,8 +122,16 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
         r.allowable_span_rounded_in,
         r.allowable_span_in
     );
-    for (name, value) in [("bending", r.bending_span_in), ("deflection", r.deflection_span_in), ("shear", r.shear_span_in)] {
-        let mark = if name == r.governing.name() { "  <- governs" } else { "" };
+    for (name, value) in [
+        ("bending", r.bending_span_in),
+        ("deflection", r.deflection_span_in),
+        ("shear", r.shear_span_in),
+    ] {
+        let mark = if name == r.governing.name() {
+            "  <- governs"
+        } else {
+            ""
+        };
         println!("  {name:<11} {:>12}  ({value:.2} in){mark}", ftin(value));
     }
     println!(
@@ -122,11 +141,18 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
         args.grade,
         ftin(section.thickness.in_inches()),
         ftin(section.depth.in_inches()),
-        if section.rough_sawn { "measured" } else { "dressed" },
+        if section.rough_sawn {
+            "measured"
+        } else {
+            "dressed"
+        },
         spacing.in_inches()
     );
     if args.grade == GradeChoice::NoStampVisible {
-        println!("  No grade stamp visible: designed as {}, a conservative default.", UNKNOWN_GRADE_DEFAULT.name());
+        println!(
+            "  No grade stamp visible: designed as {}, a conservative default.",
+            UNKNOWN_GRADE_DEFAULT.name()
+        );
     }
     println!(
         "Loads: {} psf live, {} psf dead, live-load deflection L/{}, {} service",
