@@ -39,8 +39,17 @@ fn main() {
     let median = time("500 generated members", &large, rounds);
     let start = Instant::now();
     let parsed = interchange::from_json(&interchange::to_json(&large)).expect("round trip");
-    println!("{:<28} {:>6}           once   {:>10.3?}", "500 members JSON round trip", "", start.elapsed());
+    println!(
+        "{:<28} {:>6}           once   {:>10.3?}",
+        "500 members JSON round trip",
+        "",
+        start.elapsed()
+    );
     black_box(parsed);
-    let verdict = if median <= Duration::from_millis(1) { "met" } else { "NOT met" };
+    let verdict = if median <= Duration::from_millis(1) {
+        "met"
+    } else {
+        "NOT met"
+    };
     println!("target: 500 members in 1 ms or less -> {verdict}");
 }

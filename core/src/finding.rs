@@ -391,7 +391,11 @@ pub struct FindingBuilder {
 }
 
 impl FindingBuilder {
-    pub fn new(rule: &'static RuleInfo, ctx: &MemberContext, observation_id: Option<&Arc<str>>) -> Self {
+    pub fn new(
+        rule: &'static RuleInfo,
+        ctx: &MemberContext,
+        observation_id: Option<&Arc<str>>,
+    ) -> Self {
         FindingBuilder {
             finding: Finding {
                 rule,

@@ -78,8 +78,22 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
     let mut out = Vec::new();
     let mut problems = Vec::new();
     let edition: Arc<str> = Arc::from(inspection.code_edition.as_str());
+    let (top_loads, notes) = inspection.loads.usable();
+    for message in notes {
+        problems.push(Problem {
+            location: "Inspection loads".into(),
+            message,
+        });
+    }
     for area in &inspection.areas {
-        let loads = area.loads.resolve(&inspection.loads);
+        let (area_loads, notes) = area.loads.usable();
+        for message in notes {
+            problems.push(Problem {
+                location: format!("{} loads", area.name),
+                message,
+            });
+        }
+        let loads = area_loads.resolve(&top_loads);
         let base = Shared {
             inspection,
             area_id: Arc::from(area.id.as_str()),

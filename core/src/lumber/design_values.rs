@@ -144,6 +144,17 @@ fn split_csv_line(line: &str) -> Vec<String> {
     fields
 }
 
+impl DesignValues {
+    /// The table citation without the note of where it was transcribed from.
+    pub fn source_short(&self) -> &'static str {
+        if self.size_factor_included {
+            "NDS Supplement (2018) Table 4B"
+        } else {
+            "NDS Supplement (2018) Table 4A"
+        }
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -200,16 +211,5 @@ mod tests {
             split_csv_line(r#"a,"b, c","d ""e""",f"#),
             ["a", "b, c", "d \"e\"", "f"]
         );
-    }
-}
-
-impl DesignValues {
-    /// The table citation without the note of where it was transcribed from.
-    pub fn source_short(&self) -> &'static str {
-        if self.size_factor_included {
-            "NDS Supplement (2018) Table 4B"
-        } else {
-            "NDS Supplement (2018) Table 4A"
-        }
     }
 }

@@ -91,6 +91,38 @@ impl LoadSettings {
     }
 }
 
+impl LoadSettings {
+    /// These settings with unusable numbers removed, and a note of each removed.
+    pub fn usable(&self) -> (LoadSettings, Vec<String>) {
+        let mut out = *self;
+        let mut notes = Vec::new();
+        let mut keep = |value: &mut Option<f64>, ok: fn(f64) -> bool, what: &str| {
+            if let Some(v) = *value {
+                if !ok(v) {
+                    notes.push(format!("{what} {v} is not usable; the default is used"));
+                    *value = None;
+                }
+            }
+        };
+        keep(
+            &mut out.live_psf,
+            |v| v > 0.0 && v <= 500.0,
+            "live load (psf, more than 0 to 500)",
+        );
+        keep(
+            &mut out.dead_psf,
+            |v| (0.0..=500.0).contains(&v),
+            "dead load (psf, 0 to 500)",
+        );
+        keep(
+            &mut out.deflection,
+            |v| (60.0..=1200.0).contains(&v),
+            "deflection limit L/n (n 60 to 1200)",
+        );
+        (out, notes)
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

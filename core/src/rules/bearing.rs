@@ -64,7 +64,12 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     }
 }
 
-fn one(ctx: &MemberContext, bearing: Bearing, ends: Ends, observation: Option<&Arc<str>>) -> Finding {
+fn one(
+    ctx: &MemberContext,
+    bearing: Bearing,
+    ends: Ends,
+    observation: Option<&Arc<str>>,
+) -> Finding {
     let b = FindingBuilder::new(&RULE, ctx, observation);
     let minimum = minimum_bearing(bearing.on);
     let detail = |length, reaction| {

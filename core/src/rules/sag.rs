@@ -70,7 +70,12 @@ pub struct SagDetail {
     pub outside: usize,
 }
 
-fn one(ctx: &MemberContext, id: &Arc<str>, readings: &[SagReading], spacer: Option<Length>) -> Finding {
+fn one(
+    ctx: &MemberContext,
+    id: &Arc<str>,
+    readings: &[SagReading],
+    spacer: Option<Length>,
+) -> Finding {
     let b = FindingBuilder::new(&RULE, ctx, Some(id));
     let Some(span) = ctx.clear_span() else {
         return b.not_checked(
