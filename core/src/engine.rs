@@ -37,7 +37,9 @@ impl Evaluation {
 /// Runs every rule over every member.
 pub fn evaluate(inspection: &Inspection) -> Evaluation {
     let (contexts, problems) = members(inspection);
-    let mut findings = Vec::with_capacity(contexts.len() * 4);
+    // About one finding per observation, and up to four member-wide ones per member.
+    let observations: usize = contexts.iter().map(|c| c.observations.len()).sum();
+    let mut findings = Vec::with_capacity(observations + contexts.len() * 4);
     for ctx in &contexts {
         for rule in RULES {
             (rule.check)(ctx, &mut findings);

@@ -73,13 +73,13 @@ fn one(
     let b = FindingBuilder::new(&RULE, ctx, observation);
     let minimum = minimum_bearing(bearing.on);
     let detail = |length, reaction| {
-        Detail::Bearing(BearingDetail {
+        Detail::Bearing(Box::new(BearingDetail {
             ends,
             on: bearing.on,
             length,
             minimum,
             reaction,
-        })
+        }))
     };
     let Some(minimum) = minimum else {
         return b

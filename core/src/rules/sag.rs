@@ -104,7 +104,7 @@ fn one(
         Bound::AtMost,
         ctx.units,
     ))
-    .finish(Detail::Sag(detail))
+    .finish(Detail::Sag(Box::new(detail)))
 }
 
 impl Wording for SagDetail {

@@ -111,7 +111,7 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     };
     out.push(FindingBuilder::new(&RULE, ctx, None).not_checked(
         "options to discuss for the over-span above, computed, not prescribed",
-        Detail::SpanOptions(detail),
+        Detail::SpanOptions(Box::new(detail)),
     ));
 }
 
