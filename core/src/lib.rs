@@ -9,6 +9,7 @@ pub mod interchange;
 pub mod lumber;
 pub mod mechanics;
 pub mod model;
+pub mod photo;
 pub mod rules;
 mod serde_text;
 pub mod units;

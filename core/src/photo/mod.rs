@@ -1,0 +1,102 @@
+//! Photo import: JPEG or PNG bytes in; an upright report image (1600 px long side) and a
+//! thumbnail (320 px), both JPEG without any metadata, out. Bad input is refused before any
+//! large allocation.
+
+mod exif;
+mod pixels;
+mod sniff;
+
+pub use sniff::{sniff, SourceFormat};
+
+use thiserror::Error;
+
+/// Long side of the report image, px.
+pub const REPORT_LONG_SIDE: u32 = 1600;
+/// Long side of the thumbnail, px.
+pub const THUMB_LONG_SIDE: u32 = 320;
+/// JPEG quality of the report image and the thumbnail.
+pub const REPORT_QUALITY: i32 = 80;
+pub const THUMB_QUALITY: i32 = 75;
+/// Largest file accepted (a 12 MP phone JPEG is 3-6 MB; a 200 MP one about 40 MB).
+pub const MAX_FILE_BYTES: usize = 64 * 1024 * 1024;
+/// Largest side accepted, px (JPEG's own ceiling is 65535).
+pub const MAX_SIDE: u32 = 16_384;
+/// Largest JPEG accepted, pixels: JPEGs are decoded at reduced scale, so memory stays small.
+pub const MAX_JPEG_PIXELS: u64 = 210_000_000;
+/// Largest PNG accepted, pixels: PNGs are decoded at full size (3 bytes a pixel).
+pub const MAX_PNG_PIXELS: u64 = 40_000_000;
+
+#[derive(Debug, Error, PartialEq)]
+pub enum PhotoError {
+    #[error("the file is empty")]
+    Empty,
+    #[error("the file is {0} bytes; photos over 64 MiB are not accepted")]
+    TooLarge(usize),
+    #[error("{0} photos are not supported; set the camera to JPEG (\"Most compatible\") or share the photo as JPEG")]
+    Unsupported(&'static str),
+    #[error("not an image (neither JPEG nor PNG)")]
+    NotAnImage,
+    #[error("the image is {0} x {1} px, larger than this app accepts")]
+    TooManyPixels(u32, u32),
+    #[error("the image is damaged or cut short: {0}")]
+    Damaged(String),
+}
+
+/// The two images kept for the report, and what was learnt on the way.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ProcessedPhoto {
+    pub format: SourceFormat,
+    /// Size of the source as stored (before the EXIF orientation).
+    pub source_width: u32,
+    pub source_height: u32,
+    /// EXIF orientation found (1 to 8; 1 when none).
+    pub orientation: u8,
+    pub report_jpeg: Vec<u8>,
+    pub report_width: u32,
+    pub report_height: u32,
+    pub thumb_jpeg: Vec<u8>,
+    pub thumb_width: u32,
+    pub thumb_height: u32,
+}
+
+/// Runs the whole import of one photo, single-threaded.
+pub fn process(bytes: &[u8]) -> Result<ProcessedPhoto, PhotoError> {
+    if bytes.is_empty() {
+        return Err(PhotoError::Empty);
+    }
+    if bytes.len() > MAX_FILE_BYTES {
+        return Err(PhotoError::TooLarge(bytes.len()));
+    }
+    let format = sniff(bytes)?;
+    let decoded = match format {
+        SourceFormat::Jpeg => pixels::decode_jpeg(bytes, REPORT_LONG_SIDE)?,
+        SourceFormat::Png => pixels::decode_png(bytes)?,
+    };
+    let orientation = decoded.orientation;
+    let (source_width, source_height) = (decoded.source_width, decoded.source_height);
+    let report = pixels::fit(decoded.image, REPORT_LONG_SIDE)?;
+    let report = pixels::orient(report, orientation);
+    let thumb = pixels::fit(report.clone(), THUMB_LONG_SIDE)?;
+    Ok(ProcessedPhoto {
+        format,
+        source_width,
+        source_height,
+        orientation,
+        report_width: report.width,
+        report_height: report.height,
+        report_jpeg: pixels::encode(&report, REPORT_QUALITY)?,
+        thumb_width: thumb.width,
+        thumb_height: thumb.height,
+        thumb_jpeg: pixels::encode(&thumb, THUMB_QUALITY)?,
+    })
+}
+
+/// Width and height of a JPEG without decoding it (for embedding a stored image).
+pub fn jpeg_size(bytes: &[u8]) -> Result<(u32, u32), PhotoError> {
+    pixels::jpeg_header(bytes).map(|h| (h.0, h.1))
+}
+
+#[cfg(test)]
+pub(crate) mod test_images;
+#[cfg(test)]
+mod tests;
