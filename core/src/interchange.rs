@@ -174,6 +174,17 @@ mod tests {
     }
 
     #[test]
+    fn photo_references_read_and_write() {
+        let text = MINIMAL.replace(
+            r#""date":"2026-12-01""#,
+            r#""date":"2026-12-01","photos":[{"id":"p1","file":"photos/a.jpg","attached_to":"o1","caption":"Notch, 李"}]"#,
+        );
+        let i = from_json(&text).unwrap();
+        assert_eq!(i.photos[0].caption, "Notch, 李");
+        assert_eq!(from_json(&to_json(&i)).unwrap(), i);
+    }
+
+    #[test]
     fn non_latin_text_survives() {
         let text = MINIMAL.replace("1 Elm", "Nguyễn Văn 李 Zoë Ångström");
         let i = from_json(&text).unwrap();

@@ -12,6 +12,7 @@ pub mod model;
 pub mod photo;
 pub mod rules;
 mod serde_text;
+pub mod store;
 pub mod units;
 pub mod validate;
 

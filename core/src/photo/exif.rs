@@ -82,7 +82,9 @@ mod tests {
     /// A JPEG prefix with an APP1 EXIF segment holding only the orientation tag (0x0112).
     fn exif_prefix(orientation: u16, big_endian: bool) -> Vec<u8> {
         let mut tiff = Vec::new();
-        let (b16, b32): (fn(u16) -> [u8; 2], fn(u32) -> [u8; 4]) = if big_endian {
+        type Bytes16 = fn(u16) -> [u8; 2];
+        type Bytes32 = fn(u32) -> [u8; 4];
+        let (b16, b32): (Bytes16, Bytes32) = if big_endian {
             (u16::to_be_bytes, u32::to_be_bytes)
         } else {
             (u16::to_le_bytes, u32::to_le_bytes)

@@ -1,0 +1,317 @@
+//! One-file export and import of an inspection with its photos: a zip holding
+//! `inspection.json` (the interchange format), `notes.json` (the inspector's notes on
+//! findings), `photos/<hash>.jpg` (report images), `thumbs/<hash>.jpg` and, when kept,
+//! `originals/<hash>.<jpg|png>`. Import checks every name and size, refuses bombs, and
+//! replaces an inspection with the same id rather than duplicating it.
+
+use super::clock::now_utc;
+use super::files::{is_hash, write_durably, Kind, PhotoFiles};
+use super::notes::FindingNote;
+use super::save;
+use super::{Result, Store, StoreError};
+use crate::interchange;
+use crate::model::Inspection;
+use crate::photo::{self, sniff, SourceFormat};
+use std::collections::HashMap;
+use std::io::{Read, Write};
+use std::path::Path;
+use thiserror::Error;
+use zip::write::SimpleFileOptions;
+use zip::CompressionMethod;
+
+/// Most entries a bundle may hold.
+const MAX_ENTRIES: usize = 20_000;
+/// Most bytes one entry may expand to.
+const MAX_ENTRY_BYTES: u64 = photo::MAX_FILE_BYTES as u64;
+/// Most bytes all entries together may expand to.
+const MAX_TOTAL_BYTES: u64 = 4 * 1024 * 1024 * 1024;
+
+#[derive(Debug, Error, PartialEq)]
+pub enum BundleError {
+    #[error("not a bundle (not a zip file): {0}")]
+    NotAZip(String),
+    #[error("the bundle has {0} entries; at most 20000")]
+    TooManyEntries(usize),
+    #[error(
+        "entry \"{0}\" is not a name a bundle holds (refused: it could write outside the store)"
+    )]
+    BadName(String),
+    #[error("entry \"{0}\" expands to more than its limit")]
+    TooBig(String),
+    #[error("the bundle expands to more than 4 GiB")]
+    TooBigInAll,
+    #[error("the bundle has no inspection.json")]
+    NoInspection,
+    #[error("inspection.json: {0}")]
+    Inspection(#[from] interchange::InterchangeError),
+    #[error("entry \"{0}\": {1}")]
+    BadEntry(String, String),
+}
+
+/// What an import did.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ImportOutcome {
+    pub inspection_id: String,
+    /// True when an inspection with this id was already in the store and was replaced.
+    pub replaced: bool,
+    pub photos: usize,
+}
+
+/// One entry's place in a bundle.
+#[derive(Debug, Clone, PartialEq)]
+enum Entry {
+    Inspection,
+    Notes,
+    Image(Kind, String, &'static str),
+}
+
+fn classify(name: &str) -> Option<Entry> {
+    match name {
+        "inspection.json" => return Some(Entry::Inspection),
+        "notes.json" => return Some(Entry::Notes),
+        _ => {}
+    }
+    let (folder, file) = name.split_once('/')?;
+    let (hash, ext) = file.split_once('.')?;
+    if !is_hash(hash) {
+        return None;
+    }
+    match (folder, ext) {
+        ("photos", "jpg") => Some(Entry::Image(Kind::Report, hash.into(), "jpg")),
+        ("thumbs", "jpg") => Some(Entry::Image(Kind::Thumb, hash.into(), "jpg")),
+        ("originals", "jpg") => Some(Entry::Image(Kind::Original, hash.into(), "jpg")),
+        ("originals", "png") => Some(Entry::Image(Kind::Original, hash.into(), "png")),
+        _ => None,
+    }
+}
+
+impl Store {
+    /// Puts an inspection read from an interchange file into the store (replacing one with the
+    /// same id). Photo references keep their file names; their images come with a bundle.
+    pub fn import_inspection(&mut self, inspection: &Inspection) -> Result<ImportOutcome> {
+        self.replace(inspection, &[])
+    }
+
+    /// The inspection as an interchange value (the same as `load_inspection`).
+    pub fn export_inspection(&self, id: &str) -> Result<Inspection> {
+        self.load_inspection(id)
+    }
+
+    /// Writes one inspection and its photos to a bundle file, durably.
+    pub fn export_bundle(&self, inspection_id: &str, path: &Path) -> Result<()> {
+        let inspection = self.load_inspection(inspection_id)?;
+        let notes = self.finding_notes(inspection_id)?;
+        let mut zip = zip::ZipWriter::new(std::io::Cursor::new(Vec::new()));
+        let json = SimpleFileOptions::default().compression_method(CompressionMethod::Deflated);
+        let stored = SimpleFileOptions::default().compression_method(CompressionMethod::Stored);
+        let zip_err = |e: zip::result::ZipError| StoreError::Io(std::io::Error::other(e));
+        zip.start_file("inspection.json", json).map_err(zip_err)?;
+        zip.write_all(interchange::to_json(&inspection).as_bytes())?;
+        zip.start_file("notes.json", json).map_err(zip_err)?;
+        zip.write_all(serde_json::to_string_pretty(&notes)?.as_bytes())?;
+        let mut written = std::collections::HashSet::new();
+        for p in self.photos_of_inspection(inspection_id)? {
+            let Some(hash) = p.hash.filter(|h| written.insert(h.clone())) else {
+                continue;
+            };
+            let files = [
+                (p.report_path, format!("photos/{hash}.jpg")),
+                (p.thumb_path, format!("thumbs/{hash}.jpg")),
+                (
+                    p.original_path.clone(),
+                    format!(
+                        "originals/{hash}.{}",
+                        original_ext(p.original_path.as_deref())
+                    ),
+                ),
+            ];
+            for (path, name) in files {
+                if let Some(path) = path {
+                    zip.start_file(name, stored).map_err(zip_err)?;
+                    zip.write_all(&std::fs::read(path)?)?;
+                }
+            }
+        }
+        let bytes = zip.finish().map_err(zip_err)?.into_inner();
+        write_durably(path, &bytes)?;
+        Ok(())
+    }
+
+    /// Reads a bundle into the store. Everything is checked before anything is written.
+    pub fn import_bundle(
+        &mut self,
+        path: &Path,
+    ) -> std::result::Result<ImportOutcome, ImportError> {
+        let file = std::fs::File::open(path).map_err(StoreError::from)?;
+        let contents = read_bundle(file)?;
+        for (kind, hash, ext, bytes) in &contents.images {
+            self.photos
+                .put(*kind, hash, ext, bytes)
+                .map_err(StoreError::from)?;
+        }
+        Ok(self.replace(&contents.inspection, &contents.notes)?)
+    }
+
+    /// Replaces (or creates) the inspection with this id, in one transaction.
+    fn replace(&mut self, inspection: &Inspection, notes: &[FindingNote]) -> Result<ImportOutcome> {
+        let tx = self.conn.transaction()?;
+        let created: Option<String> = rusqlite::OptionalExtension::optional(tx.query_row(
+            "SELECT created_at FROM inspections WHERE id = ?1",
+            [&inspection.id],
+            |r| r.get(0),
+        ))?;
+        let replaced = created.is_some();
+        tx.execute("DELETE FROM inspections WHERE id = ?1", [&inspection.id])?;
+        let now = now_utc();
+        save::insert_header(&tx, inspection, created.as_deref().unwrap_or(&now), &now)?;
+        for (n, area) in inspection.areas.iter().enumerate() {
+            save::insert_area(&tx, &inspection.id, n as i64, area)?;
+        }
+        for (n, photo) in inspection.photos.iter().enumerate() {
+            save::insert_photo_ref(&tx, &inspection.id, n as i64, photo, &now)?;
+        }
+        fill_photo_details(&self.photos, &tx, &inspection.id)?;
+        for note in notes {
+            tx.execute(
+                "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, updated_at)
+                 VALUES (?1, ?2, ?3, ?4, ?5, ?6)",
+                rusqlite::params![inspection.id, note.key, note.note, note.recommendation, note.not_applicable_reason, now],
+            )?;
+        }
+        tx.commit()?;
+        self.sweep_orphans()?;
+        Ok(ImportOutcome {
+            inspection_id: inspection.id.clone(),
+            replaced,
+            photos: inspection.photos.len(),
+        })
+    }
+}
+
+/// Sets size and original extension on photo rows whose files are present.
+fn fill_photo_details(
+    files: &PhotoFiles,
+    tx: &rusqlite::Transaction,
+    inspection_id: &str,
+) -> Result<()> {
+    let hashes: Vec<String> = tx
+        .prepare("SELECT DISTINCT content_hash FROM photos WHERE inspection_id = ?1 AND content_hash IS NOT NULL")?
+        .query_map([inspection_id], |r| r.get(0))?
+        .collect::<rusqlite::Result<_>>()?;
+    for hash in hashes {
+        let report = files.path(Kind::Report, &hash, "jpg");
+        let size = std::fs::read(&report)
+            .ok()
+            .and_then(|b| photo::jpeg_size(&b).ok());
+        let ext = ["jpg", "png"]
+            .into_iter()
+            .find(|e| files.path(Kind::Original, &hash, e).exists());
+        tx.execute(
+            "UPDATE photos SET width = ?3, height = ?4, original_ext = ?5 WHERE inspection_id = ?1 AND content_hash = ?2",
+            rusqlite::params![inspection_id, hash, size.map(|s| s.0), size.map(|s| s.1), ext],
+        )?;
+    }
+    Ok(())
+}
+
+fn original_ext(path: Option<&Path>) -> &'static str {
+    match path.and_then(|p| p.extension()).and_then(|e| e.to_str()) {
+        Some("png") => "png",
+        _ => "jpg",
+    }
+}
+
+/// Why a bundle could not be imported.
+#[derive(Debug, Error)]
+pub enum ImportError {
+    #[error(transparent)]
+    Bundle(#[from] BundleError),
+    #[error(transparent)]
+    Store(#[from] StoreError),
+}
+
+struct BundleContents {
+    inspection: Inspection,
+    notes: Vec<FindingNote>,
+    images: Vec<(Kind, String, &'static str, Vec<u8>)>,
+}
+
+/// Reads and checks every entry; nothing is written.
+fn read_bundle(file: std::fs::File) -> std::result::Result<BundleContents, BundleError> {
+    let mut zip = zip::ZipArchive::new(file).map_err(|e| BundleError::NotAZip(e.to_string()))?;
+    if zip.len() > MAX_ENTRIES {
+        return Err(BundleError::TooManyEntries(zip.len()));
+    }
+    let mut total = 0u64;
+    let mut inspection = None;
+    let mut notes = Vec::new();
+    let mut images: HashMap<(String, &'static str), Vec<u8>> = HashMap::new();
+    let mut kinds = Vec::new();
+    for index in 0..zip.len() {
+        let mut entry = zip
+            .by_index(index)
+            .map_err(|e| BundleError::NotAZip(e.to_string()))?;
+        let name = entry.name().to_string();
+        if entry.is_dir() {
+            continue;
+        }
+        let Some(place) = classify(&name) else {
+            return Err(BundleError::BadName(name));
+        };
+        if entry.size() > MAX_ENTRY_BYTES {
+            return Err(BundleError::TooBig(name));
+        }
+        // Read at most the limit + 1 byte, whatever the header claims (a lying header or a
+        // deflate bomb stops there).
+        let mut bytes = Vec::new();
+        (&mut entry)
+            .take(MAX_ENTRY_BYTES + 1)
+            .read_to_end(&mut bytes)
+            .map_err(|e| BundleError::BadEntry(name.clone(), e.to_string()))?;
+        if bytes.len() as u64 > MAX_ENTRY_BYTES {
+            return Err(BundleError::TooBig(name));
+        }
+        total += bytes.len() as u64;
+        if total > MAX_TOTAL_BYTES {
+            return Err(BundleError::TooBigInAll);
+        }
+        match place {
+            Entry::Inspection => inspection = Some(interchange::from_json_bytes(&bytes)?),
+            Entry::Notes => {
+                notes = serde_json::from_slice(&bytes)
+                    .map_err(|e| BundleError::BadEntry(name.clone(), e.to_string()))?
+            }
+            Entry::Image(kind, hash, ext) => {
+                check_image(kind, &bytes).map_err(|e| BundleError::BadEntry(name.clone(), e))?;
+                kinds.push((kind, hash.clone(), ext));
+                images.insert((format!("{kind:?}/{hash}"), ext), bytes);
+            }
+        }
+    }
+    let inspection = inspection.ok_or(BundleError::NoInspection)?;
+    let images = kinds
+        .into_iter()
+        .filter_map(|(kind, hash, ext)| {
+            images
+                .remove(&(format!("{kind:?}/{hash}"), ext))
+                .map(|b| (kind, hash, ext, b))
+        })
+        .collect();
+    Ok(BundleContents {
+        inspection,
+        notes,
+        images,
+    })
+}
+
+/// Report images and thumbnails must be JPEGs within the size limits; originals JPEG or PNG.
+fn check_image(kind: Kind, bytes: &[u8]) -> std::result::Result<(), String> {
+    let format = sniff(bytes).map_err(|e| e.to_string())?;
+    match (kind, format) {
+        (Kind::Report | Kind::Thumb, SourceFormat::Jpeg) => photo::jpeg_size(bytes)
+            .map(|_| ())
+            .map_err(|e| e.to_string()),
+        (Kind::Original, _) => Ok(()),
+        _ => Err("not a JPEG".into()),
+    }
+}

@@ -1,0 +1,48 @@
+//! The current time as an RFC 3339 UTC timestamp, without a date library.
+
+use std::time::{SystemTime, UNIX_EPOCH};
+
+/// "2026-12-01T23:40:12.123Z"
+pub fn now_utc() -> String {
+    let since = SystemTime::now()
+        .duration_since(UNIX_EPOCH)
+        .unwrap_or_default();
+    format_utc(since.as_secs() as i64, since.subsec_millis())
+}
+
+/// Formats seconds since 1970 as a UTC timestamp. Days to civil date: H. Hinnant,
+/// "chrono-Compatible Low-Level Date Algorithms" (civil_from_days).
+pub fn format_utc(secs: i64, millis: u32) -> String {
+    let days = secs.div_euclid(86_400);
+    let rem = secs.rem_euclid(86_400);
+    let z = days + 719_468;
+    let era = z.div_euclid(146_097);
+    let doe = z - era * 146_097;
+    let yoe = (doe - doe / 1460 + doe / 36_524 - doe / 146_096) / 365;
+    let doy = doe - (365 * yoe + yoe / 4 - yoe / 100);
+    let mp = (5 * doy + 2) / 153;
+    let day = doy - (153 * mp + 2) / 5 + 1;
+    let month = if mp < 10 { mp + 3 } else { mp - 9 };
+    let year = yoe + era * 400 + i64::from(month <= 2);
+    format!(
+        "{year:04}-{month:02}-{day:02}T{:02}:{:02}:{:02}.{millis:03}Z",
+        rem / 3600,
+        rem % 3600 / 60,
+        rem % 60
+    )
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    // Source: POSIX time; 1 000 000 000 s = 2001-09-09T01:46:40Z; 951 782 400 = 2000-02-29
+    // (a leap day); 0 = 1970-01-01 (`date -u -d @N`).
+    #[test]
+    fn known_instants() {
+        assert_eq!(format_utc(0, 0), "1970-01-01T00:00:00.000Z");
+        assert_eq!(format_utc(1_000_000_000, 5), "2001-09-09T01:46:40.005Z");
+        assert_eq!(format_utc(951_782_400, 0), "2000-02-29T00:00:00.000Z");
+        assert_eq!(format_utc(1_796_083_200, 0), "2026-12-01T00:00:00.000Z");
+    }
+}

@@ -1,0 +1,167 @@
+//! Reading an inspection out of its rows into the engine's model, in stored order.
+
+use super::{Result, Store, StoreError};
+use crate::model::*;
+use rusqlite::{params, OptionalExtension};
+
+/// A joist's or single member's stored parts: id, label, framing, observations.
+type StoredMember = (String, String, Framing, Vec<Observation>);
+
+impl Store {
+    /// The whole inspection as the engine's model (and the interchange format).
+    pub fn load_inspection(&self, id: &str) -> Result<Inspection> {
+        let mut inspection = self
+            .conn
+            .query_row(
+                "SELECT id, format_version, address, year_built, client_name, client_email, client_phone,
+                    inspector_name, inspector_company, inspector_license, visit_date, conditions,
+                    code_edition, local_amendments, units, loads
+                 FROM inspections WHERE id = ?1",
+                [id],
+                |r| {
+                    Ok((
+                        Inspection {
+                            format: FORMAT_NAME.into(),
+                            version: r.get(1)?,
+                            id: r.get(0)?,
+                            property: Property { address: r.get(2)?, year_built: r.get(3)? },
+                            client: Client { name: r.get(4)?, email: r.get(5)?, phone: r.get(6)? },
+                            inspector: InspectorInfo { name: r.get(7)?, company: r.get(8)?, license: r.get(9)? },
+                            date: r.get(10)?,
+                            conditions: r.get(11)?,
+                            code_edition: r.get(12)?,
+                            local_amendments: r.get(13)?,
+                            units: Default::default(),
+                            loads: Default::default(),
+                            areas: vec![],
+                            photos: vec![],
+                        },
+                        r.get::<_, String>(14)?,
+                        r.get::<_, String>(15)?,
+                    ))
+                },
+            )
+            .optional()?
+            .map(|(mut i, units, loads)| -> Result<Inspection> {
+                i.units = serde_json::from_value(serde_json::Value::String(units))?;
+                i.loads = serde_json::from_str(&loads)?;
+                Ok(i)
+            })
+            .ok_or_else(|| StoreError::NotFound(id.into()))??;
+        inspection.areas = self.areas(id)?;
+        inspection.photos = self.photo_refs(id)?;
+        Ok(inspection)
+    }
+
+    fn areas(&self, inspection_id: &str) -> Result<Vec<Area>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, name, kind, loads, notes FROM areas WHERE inspection_id = ?1 ORDER BY position, id",
+        )?;
+        let rows: Vec<(String, String, String, String, String)> = stmt
+            .query_map([inspection_id], |r| {
+                Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?, r.get(4)?))
+            })?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, name, kind, loads, notes)| {
+                Ok(Area {
+                    kind: serde_json::from_value(serde_json::Value::String(kind))?,
+                    loads: serde_json::from_str(&loads)?,
+                    runs: self.runs(&id)?,
+                    members: self
+                        .members(&id, None)?
+                        .into_iter()
+                        .map(|(id, label, framing, observations)| Member {
+                            id,
+                            label,
+                            framing,
+                            observations,
+                        })
+                        .collect(),
+                    id,
+                    name,
+                    notes,
+                })
+            })
+            .collect()
+    }
+
+    fn runs(&self, area_id: &str) -> Result<Vec<JoistRun>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, label, framing FROM runs WHERE area_id = ?1 ORDER BY position, id",
+        )?;
+        let rows: Vec<(String, String, String)> = stmt
+            .query_map([area_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?)))?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, label, framing)| {
+                Ok(JoistRun {
+                    framing: serde_json::from_str(&framing)?,
+                    observations: self.observations("run_id", &id)?,
+                    joists: self
+                        .members(area_id, Some(&id))?
+                        .into_iter()
+                        .map(|(id, label, framing, observations)| Joist {
+                            id,
+                            label,
+                            framing,
+                            observations,
+                        })
+                        .collect(),
+                    id,
+                    label,
+                })
+            })
+            .collect()
+    }
+
+    /// Members of an area: the joists of `run_id`, or the single members when None.
+    fn members(&self, area_id: &str, run_id: Option<&str>) -> Result<Vec<StoredMember>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, label, framing FROM members WHERE area_id = ?1 AND run_id IS ?2 ORDER BY position, id",
+        )?;
+        let rows: Vec<(String, String, String)> = stmt
+            .query_map(params![area_id, run_id], |r| {
+                Ok((r.get(0)?, r.get(1)?, r.get(2)?))
+            })?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, label, framing)| {
+                let observations = self.observations("member_id", &id)?;
+                Ok((id, label, serde_json::from_str(&framing)?, observations))
+            })
+            .collect()
+    }
+
+    fn observations(&self, owner_column: &str, owner_id: &str) -> Result<Vec<Observation>> {
+        let sql = format!("SELECT id, data, note FROM observations WHERE {owner_column} = ?1 ORDER BY position, id");
+        let mut stmt = self.conn.prepare_cached(&sql)?;
+        let rows: Vec<(String, String, String)> = stmt
+            .query_map([owner_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?)))?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, data, note)| {
+                Ok(Observation {
+                    id: id.into(),
+                    kind: serde_json::from_str(&data)?,
+                    note,
+                })
+            })
+            .collect()
+    }
+
+    fn photo_refs(&self, inspection_id: &str) -> Result<Vec<PhotoRef>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, file, attached_to, caption FROM photos WHERE inspection_id = ?1 ORDER BY position, id",
+        )?;
+        let rows = stmt.query_map([inspection_id], |r| {
+            Ok(PhotoRef {
+                id: r.get(0)?,
+                file: r.get(1)?,
+                attached_to: r.get(2)?,
+                caption: r.get(3)?,
+            })
+        })?;
+        Ok(rows.collect::<rusqlite::Result<_>>()?)
+    }
+}

@@ -1,0 +1,133 @@
+//! The local store: the only code that touches SQLite and the photo files. Every change is
+//! one transaction, durable when the call returns; loading gives the engine's model.
+
+mod bundle;
+mod clock;
+mod files;
+mod inspections;
+mod load;
+mod migrate;
+mod notes;
+mod photos;
+mod save;
+mod tree;
+
+pub use bundle::{BundleError, ImportOutcome};
+pub use clock::now_utc;
+pub use inspections::{InspectionSummary, ListFilter, NewInspection};
+pub use migrate::SCHEMA_VERSION;
+pub use notes::{DeliveredReport, FindingNote};
+pub use photos::StoredPhoto;
+
+use rusqlite::Connection;
+use std::path::{Path, PathBuf};
+use thiserror::Error;
+
+#[derive(Debug, Error)]
+pub enum StoreError {
+    #[error("the database is version {found}, newer than this app (version {known}); update the app. The file was left untouched")]
+    TooNew { found: i64, known: i64 },
+    #[error("{0} is not an Undercroft database or is damaged: {1}")]
+    NotADatabase(PathBuf, String),
+    #[error("no inspection, area, run, member, observation or photo with id {0}")]
+    NotFound(String),
+    #[error("{0}")]
+    Invalid(String),
+    #[error("photo: {0}")]
+    Photo(#[from] crate::photo::PhotoError),
+    #[error("database: {0}")]
+    Sql(#[from] rusqlite::Error),
+    #[error("file: {0}")]
+    Io(#[from] std::io::Error),
+    #[error("data: {0}")]
+    Json(#[from] serde_json::Error),
+}
+
+pub type Result<T> = std::result::Result<T, StoreError>;
+
+/// Whether the original photo files are kept beside the report images (the evidence).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum KeepOriginals {
+    Yes,
+    No,
+}
+
+/// An open store: one SQLite database and its photo folder beside it.
+pub struct Store {
+    conn: Connection,
+    photos: files::PhotoFiles,
+    keep_originals: KeepOriginals,
+}
+
+impl Store {
+    /// Opens (creating if needed) the store at `db_path`; photos live in a folder beside it
+    /// named after it (`undercroft.sqlite` -> `undercroft-photos/`). Applies pending migrations
+    /// and sweeps photo files no row refers to.
+    pub fn open(db_path: &Path) -> Result<Store> {
+        if let Some(parent) = db_path.parent().filter(|p| !p.as_os_str().is_empty()) {
+            std::fs::create_dir_all(parent)?;
+        }
+        let bad =
+            |e: rusqlite::Error| StoreError::NotADatabase(db_path.to_path_buf(), e.to_string());
+        let mut conn = Connection::open(db_path).map_err(bad)?;
+        migrate::check_version(&conn).map_err(|e| match e {
+            StoreError::Sql(e) => bad(e),
+            other => other,
+        })?;
+        configure(&conn).map_err(bad)?;
+        migrate::run(&mut conn)?;
+        let stem = db_path
+            .file_stem()
+            .and_then(|s| s.to_str())
+            .unwrap_or("undercroft");
+        let photo_dir = db_path.with_file_name(format!("{stem}-photos"));
+        let store = Store {
+            conn,
+            photos: files::PhotoFiles::new(photo_dir)?,
+            keep_originals: KeepOriginals::Yes,
+        };
+        store.sweep_orphans()?;
+        Ok(store)
+    }
+
+    /// The platform's data folder for the store (e.g. `~/.local/share/undercroft` on Linux).
+    pub fn default_path() -> Option<PathBuf> {
+        directories::ProjectDirs::from("", "", "undercroft")
+            .map(|d| d.data_dir().join("undercroft.sqlite"))
+    }
+
+    /// Whether new photos keep their original file (on by default).
+    pub fn set_keep_originals(&mut self, keep: KeepOriginals) {
+        self.keep_originals = keep;
+    }
+
+    /// `PRAGMA integrity_check` result ("ok" when sound).
+    pub fn integrity_check(&self) -> Result<String> {
+        Ok(self
+            .conn
+            .query_row("PRAGMA integrity_check", [], |r| r.get(0))?)
+    }
+
+    pub fn photo_dir(&self) -> &Path {
+        self.photos.root()
+    }
+}
+
+/// Per-connection settings. WAL with synchronous=FULL: every committed transaction is on
+/// disk (the WAL is synced at each commit) before the call returns, so an acknowledged edit
+/// survives a killed app or a power cut; NORMAL would only guard against corruption.
+fn configure(conn: &Connection) -> rusqlite::Result<()> {
+    conn.pragma_update(None, "journal_mode", "WAL")?;
+    conn.pragma_update(None, "synchronous", "FULL")?;
+    conn.pragma_update(None, "foreign_keys", "ON")?;
+    conn.busy_timeout(std::time::Duration::from_secs(5))?;
+    Ok(())
+}
+
+/// A new time-ordered id (UUID v7).
+pub fn new_id() -> String {
+    uuid::Uuid::now_v7().to_string()
+}
+
+#[cfg(test)]
+mod tests;

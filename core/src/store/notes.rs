@@ -1,0 +1,111 @@
+//! The inspector's notes and overrides on findings (kept apart from the computed findings),
+//! and the record of delivered reports.
+
+use super::clock::now_utc;
+use super::files::content_hash;
+use super::{new_id, Result, Store};
+use rusqlite::params;
+
+/// What the inspector added to one finding.
+#[derive(Debug, Clone, PartialEq, Default, serde::Serialize, serde::Deserialize)]
+pub struct FindingNote {
+    /// `Finding::key()`: rule id / member id / observation id.
+    pub key: String,
+    #[serde(default)]
+    pub note: String,
+    /// The inspector's own recommendation text, in place of the computed one.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub recommendation: Option<String>,
+    /// Set when the inspector marks the finding not applicable, with why.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub not_applicable_reason: Option<String>,
+}
+
+/// A report handed to the client.
+#[derive(Debug, Clone, PartialEq, serde::Serialize, serde::Deserialize)]
+pub struct DeliveredReport {
+    pub id: String,
+    pub delivered_at: String,
+    pub file_name: String,
+    pub sha256: String,
+    pub bytes: u64,
+}
+
+impl Store {
+    /// Saves (or, when everything is empty, clears) the inspector's note on a finding.
+    pub fn set_finding_note(&mut self, inspection_id: &str, note: &FindingNote) -> Result<()> {
+        self.edit(inspection_id, |tx| {
+            let empty = note.note.is_empty() && note.recommendation.is_none() && note.not_applicable_reason.is_none();
+            if empty {
+                tx.execute("DELETE FROM finding_notes WHERE inspection_id = ?1 AND finding_key = ?2", params![inspection_id, note.key])?;
+            } else {
+                tx.execute(
+                    "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, updated_at)
+                     VALUES (?1, ?2, ?3, ?4, ?5, ?6)
+                     ON CONFLICT (inspection_id, finding_key) DO UPDATE SET note = ?3, recommendation = ?4,
+                        not_applicable_reason = ?5, updated_at = ?6",
+                    params![inspection_id, note.key, note.note, note.recommendation, note.not_applicable_reason, now_utc()],
+                )?;
+            }
+            Ok(())
+        })
+    }
+
+    pub fn finding_notes(&self, inspection_id: &str) -> Result<Vec<FindingNote>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT finding_key, note, recommendation, not_applicable_reason FROM finding_notes
+             WHERE inspection_id = ?1 ORDER BY finding_key",
+        )?;
+        let rows = stmt.query_map([inspection_id], |r| {
+            Ok(FindingNote {
+                key: r.get(0)?,
+                note: r.get(1)?,
+                recommendation: r.get(2)?,
+                not_applicable_reason: r.get(3)?,
+            })
+        })?;
+        Ok(rows.collect::<rusqlite::Result<_>>()?)
+    }
+
+    /// Records a delivered report: its file name, hash and size, and the findings as delivered.
+    pub fn record_report(
+        &mut self,
+        inspection_id: &str,
+        file_name: &str,
+        pdf: &[u8],
+        findings_json: &str,
+    ) -> Result<DeliveredReport> {
+        let report = DeliveredReport {
+            id: new_id(),
+            delivered_at: now_utc(),
+            file_name: file_name.into(),
+            sha256: content_hash(pdf),
+            bytes: pdf.len() as u64,
+        };
+        self.edit(inspection_id, |tx| {
+            tx.execute(
+                "INSERT INTO reports (id, inspection_id, delivered_at, file_name, sha256, bytes, findings) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
+                params![report.id, inspection_id, report.delivered_at, report.file_name, report.sha256, report.bytes as i64, findings_json],
+            )?;
+            Ok(())
+        })?;
+        Ok(report)
+    }
+
+    /// Delivered reports, newest first.
+    pub fn reports(&self, inspection_id: &str) -> Result<Vec<DeliveredReport>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, delivered_at, file_name, sha256, bytes FROM reports WHERE inspection_id = ?1 ORDER BY delivered_at DESC, id DESC",
+        )?;
+        let rows = stmt.query_map([inspection_id], |r| {
+            Ok(DeliveredReport {
+                id: r.get(0)?,
+                delivered_at: r.get(1)?,
+                file_name: r.get(2)?,
+                sha256: r.get(3)?,
+                bytes: r.get::<_, i64>(4)? as u64,
+            })
+        })?;
+        Ok(rows.collect::<rusqlite::Result<_>>()?)
+    }
+}

@@ -1,0 +1,185 @@
+//! Photos in the store: imported through the photo pipeline, files written durably before the
+//! row, named by content hash, captioned and ordered per owner; orphan files swept.
+
+use super::clock::now_utc;
+use super::files::{content_hash, Kind};
+use super::inspections::found;
+use super::{KeepOriginals, Result, Store, StoreError};
+use crate::model::PhotoRef;
+use crate::photo::{self, sniff};
+use rusqlite::params;
+use std::collections::HashSet;
+use std::path::PathBuf;
+
+/// A stored photo with where its files are.
+#[derive(Debug, Clone, PartialEq)]
+pub struct StoredPhoto {
+    pub id: String,
+    pub inspection_id: String,
+    pub attached_to: String,
+    pub caption: String,
+    /// Content hash of the original file; None for a reference imported without its image.
+    pub hash: Option<String>,
+    pub width: Option<u32>,
+    pub height: Option<u32>,
+    pub report_path: Option<PathBuf>,
+    pub thumb_path: Option<PathBuf>,
+    pub original_path: Option<PathBuf>,
+}
+
+impl Store {
+    /// Imports a photo and attaches it (last in order) to an area, run, member or
+    /// observation. Nothing is stored when the bytes are refused.
+    pub fn add_photo(
+        &mut self,
+        attached_to: &str,
+        bytes: &[u8],
+        caption: &str,
+    ) -> Result<PhotoRef> {
+        let inspection_id = self.inspection_of(attached_to)?;
+        if inspection_id == attached_to {
+            return Err(StoreError::Invalid(
+                "a photo belongs to an area, run, member or observation".into(),
+            ));
+        }
+        let format = sniff(bytes).map_err(|e| {
+            if bytes.is_empty() {
+                photo::PhotoError::Empty
+            } else {
+                e
+            }
+        })?;
+        let hash = content_hash(bytes);
+        let (width, height) = match self.existing_size(&hash)? {
+            Some(size) => size,
+            None => {
+                let processed = photo::process(bytes)?;
+                self.photos
+                    .put(Kind::Thumb, &hash, "jpg", &processed.thumb_jpeg)?;
+                self.photos
+                    .put(Kind::Report, &hash, "jpg", &processed.report_jpeg)?;
+                (processed.report_width, processed.report_height)
+            }
+        };
+        let original_ext = match self.keep_originals {
+            KeepOriginals::Yes => {
+                self.photos
+                    .put(Kind::Original, &hash, format.extension(), bytes)?;
+                Some(format.extension())
+            }
+            KeepOriginals::No => None,
+        };
+        let id = super::new_id();
+        let file = format!("photos/{hash}.jpg");
+        self.edit(&inspection_id, |tx| {
+            let position: i64 =
+                tx.query_row("SELECT COALESCE(MAX(position) + 1, 0) FROM photos WHERE inspection_id = ?1", [&inspection_id], |r| r.get(0))?;
+            tx.execute(
+                "INSERT INTO photos (id, inspection_id, attached_to, position, caption, file, content_hash, width, height, original_ext, created_at)
+                 VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11)",
+                params![id, inspection_id, attached_to, position, caption, file, hash, width, height, original_ext, now_utc()],
+            )?;
+            Ok(())
+        })?;
+        Ok(PhotoRef {
+            id,
+            file,
+            attached_to: attached_to.into(),
+            caption: caption.into(),
+        })
+    }
+
+    /// Size of an already stored report image of this content, if there is one.
+    fn existing_size(&self, hash: &str) -> Result<Option<(u32, u32)>> {
+        let (report, thumb) = (
+            self.photos.path(Kind::Report, hash, "jpg"),
+            self.photos.path(Kind::Thumb, hash, "jpg"),
+        );
+        if !(report.exists() && thumb.exists()) {
+            return Ok(None);
+        }
+        Ok(photo::jpeg_size(&std::fs::read(report)?).ok())
+    }
+
+    pub fn set_photo_caption(&mut self, photo_id: &str, caption: &str) -> Result<()> {
+        let inspection_id = self.inspection_of(photo_id)?;
+        self.edit(&inspection_id, |tx| {
+            found(
+                tx.execute(
+                    "UPDATE photos SET caption = ?2 WHERE id = ?1",
+                    params![photo_id, caption],
+                )?,
+                photo_id,
+            )
+        })
+    }
+
+    /// The photos attached to one owner, in order.
+    pub fn photos_of(&self, attached_to: &str) -> Result<Vec<StoredPhoto>> {
+        self.query_photos("attached_to = ?1", attached_to)
+    }
+
+    /// Every photo of an inspection, in order.
+    pub fn photos_of_inspection(&self, inspection_id: &str) -> Result<Vec<StoredPhoto>> {
+        self.query_photos("inspection_id = ?1", inspection_id)
+    }
+
+    pub fn photo(&self, photo_id: &str) -> Result<StoredPhoto> {
+        self.query_photos("id = ?1", photo_id)?
+            .into_iter()
+            .next()
+            .ok_or_else(|| StoreError::NotFound(photo_id.into()))
+    }
+
+    fn query_photos(&self, filter: &str, value: &str) -> Result<Vec<StoredPhoto>> {
+        let sql = format!(
+            "SELECT id, inspection_id, attached_to, caption, content_hash, width, height, original_ext
+             FROM photos WHERE {filter} ORDER BY position, id"
+        );
+        let mut stmt = self.conn.prepare_cached(&sql)?;
+        let rows = stmt.query_map([value], |r| {
+            Ok((
+                r.get::<_, String>(0)?,
+                r.get::<_, String>(1)?,
+                r.get::<_, String>(2)?,
+                r.get::<_, String>(3)?,
+                r.get::<_, Option<String>>(4)?,
+                r.get::<_, Option<u32>>(5)?,
+                r.get::<_, Option<u32>>(6)?,
+                r.get::<_, Option<String>>(7)?,
+            ))
+        })?;
+        let mut out = Vec::new();
+        for row in rows {
+            let (id, inspection_id, attached_to, caption, hash, width, height, ext) = row?;
+            let existing = |kind, ext: &str| {
+                hash.as_ref()
+                    .map(|h| self.photos.path(kind, h, ext))
+                    .filter(|p| p.exists())
+            };
+            out.push(StoredPhoto {
+                report_path: existing(Kind::Report, "jpg"),
+                thumb_path: existing(Kind::Thumb, "jpg"),
+                original_path: ext.as_deref().and_then(|e| existing(Kind::Original, e)),
+                id,
+                inspection_id,
+                attached_to,
+                caption,
+                hash,
+                width,
+                height,
+            });
+        }
+        Ok(out)
+    }
+
+    /// Deletes photo files no row refers to, and temporary files of interrupted writes.
+    pub(super) fn sweep_orphans(&self) -> Result<usize> {
+        let keep: HashSet<String> = self
+            .conn
+            .prepare("SELECT DISTINCT content_hash FROM photos WHERE content_hash IS NOT NULL")?
+            .query_map([], |r| r.get(0))?
+            .collect::<rusqlite::Result<_>>()?;
+        Ok(self.photos.sweep(&keep)?)
+    }
+}

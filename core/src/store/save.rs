@@ -1,0 +1,214 @@
+//! Writing model values into rows (inside a caller's transaction): the header, and whole
+//! areas, runs, members and observations with their positions.
+
+use super::migrate::search_key;
+use super::Result;
+use crate::model::{Area, Framing, Inspection, JoistRun, Observation, PhotoRef};
+use rusqlite::{params, Transaction};
+
+/// Where an observation hangs: a run's typical joist, or a member (joist or single member).
+#[derive(Debug, Clone, Copy)]
+pub enum Owner<'a> {
+    Run(&'a str),
+    Member(&'a str),
+}
+
+pub fn insert_header(
+    tx: &Transaction,
+    i: &Inspection,
+    created_at: &str,
+    updated_at: &str,
+) -> Result<()> {
+    tx.execute(
+        "INSERT INTO inspections (id, format_version, address, year_built, client_name, client_email, client_phone,
+            inspector_name, inspector_company, inspector_license, visit_date, conditions, code_edition,
+            local_amendments, units, loads, created_at, updated_at, search_key)
+         VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, ?18, ?19)",
+        params![
+            i.id,
+            i.version,
+            i.property.address,
+            i.property.year_built,
+            i.client.name,
+            i.client.email,
+            i.client.phone,
+            i.inspector.name,
+            i.inspector.company,
+            i.inspector.license,
+            i.date,
+            i.conditions,
+            i.code_edition,
+            i.local_amendments,
+            serde_json::to_value(i.units)?.as_str().unwrap_or("imperial"),
+            serde_json::to_string(&i.loads)?,
+            created_at,
+            updated_at,
+            search_key(&i.property.address, &i.client.name),
+        ],
+    )?;
+    Ok(())
+}
+
+/// Rewrites the header fields (everything but areas and photos).
+pub fn update_header(tx: &Transaction, i: &Inspection, updated_at: &str) -> Result<usize> {
+    Ok(tx.execute(
+        "UPDATE inspections SET format_version = ?2, address = ?3, year_built = ?4, client_name = ?5,
+            client_email = ?6, client_phone = ?7, inspector_name = ?8, inspector_company = ?9,
+            inspector_license = ?10, visit_date = ?11, conditions = ?12, code_edition = ?13,
+            local_amendments = ?14, units = ?15, loads = ?16, updated_at = ?17, search_key = ?18
+         WHERE id = ?1",
+        params![
+            i.id,
+            i.version,
+            i.property.address,
+            i.property.year_built,
+            i.client.name,
+            i.client.email,
+            i.client.phone,
+            i.inspector.name,
+            i.inspector.company,
+            i.inspector.license,
+            i.date,
+            i.conditions,
+            i.code_edition,
+            i.local_amendments,
+            serde_json::to_value(i.units)?.as_str().unwrap_or("imperial"),
+            serde_json::to_string(&i.loads)?,
+            updated_at,
+            search_key(&i.property.address, &i.client.name),
+        ],
+    )?)
+}
+
+pub fn insert_area(
+    tx: &Transaction,
+    inspection_id: &str,
+    position: i64,
+    area: &Area,
+) -> Result<()> {
+    tx.execute(
+        "INSERT INTO areas (id, inspection_id, position, name, kind, loads, notes) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
+        params![
+            area.id,
+            inspection_id,
+            position,
+            area.name,
+            text_of(&area.kind)?,
+            serde_json::to_string(&area.loads)?,
+            area.notes
+        ],
+    )?;
+    for (n, run) in area.runs.iter().enumerate() {
+        insert_run(tx, &area.id, n as i64, run)?;
+    }
+    for (n, member) in area.members.iter().enumerate() {
+        insert_member(
+            tx,
+            &area.id,
+            None,
+            n as i64,
+            &member.id,
+            &member.label,
+            &member.framing,
+            &member.observations,
+        )?;
+    }
+    Ok(())
+}
+
+pub fn insert_run(tx: &Transaction, area_id: &str, position: i64, run: &JoistRun) -> Result<()> {
+    tx.execute(
+        "INSERT INTO runs (id, area_id, position, label, framing) VALUES (?1, ?2, ?3, ?4, ?5)",
+        params![
+            run.id,
+            area_id,
+            position,
+            run.label,
+            serde_json::to_string(&run.framing)?
+        ],
+    )?;
+    for (n, o) in run.observations.iter().enumerate() {
+        insert_observation(tx, Owner::Run(&run.id), n as i64, o)?;
+    }
+    for (n, joist) in run.joists.iter().enumerate() {
+        insert_member(
+            tx,
+            area_id,
+            Some(&run.id),
+            n as i64,
+            &joist.id,
+            &joist.label,
+            &joist.framing,
+            &joist.observations,
+        )?;
+    }
+    Ok(())
+}
+
+#[allow(clippy::too_many_arguments)]
+pub fn insert_member(
+    tx: &Transaction,
+    area_id: &str,
+    run_id: Option<&str>,
+    position: i64,
+    id: &str,
+    label: &str,
+    framing: &Framing,
+    observations: &[Observation],
+) -> Result<()> {
+    tx.execute(
+        "INSERT INTO members (id, area_id, run_id, position, label, framing) VALUES (?1, ?2, ?3, ?4, ?5, ?6)",
+        params![id, area_id, run_id, position, label, serde_json::to_string(framing)?],
+    )?;
+    for (n, o) in observations.iter().enumerate() {
+        insert_observation(tx, Owner::Member(id), n as i64, o)?;
+    }
+    Ok(())
+}
+
+pub fn insert_observation(
+    tx: &Transaction,
+    owner: Owner,
+    position: i64,
+    o: &Observation,
+) -> Result<()> {
+    let (run_id, member_id) = match owner {
+        Owner::Run(id) => (Some(id), None),
+        Owner::Member(id) => (None, Some(id)),
+    };
+    tx.execute(
+        "INSERT INTO observations (id, run_id, member_id, position, kind, data, note) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
+        params![o.id.as_ref(), run_id, member_id, position, o.kind.name(), serde_json::to_string(&o.kind)?, o.note],
+    )?;
+    Ok(())
+}
+
+/// A photo reference from an interchange file (its image files may come later, or never).
+pub fn insert_photo_ref(
+    tx: &Transaction,
+    inspection_id: &str,
+    position: i64,
+    p: &PhotoRef,
+    created_at: &str,
+) -> Result<()> {
+    let hash = p
+        .file
+        .rsplit('/')
+        .next()
+        .and_then(|name| name.split('.').next())
+        .filter(|h| super::files::is_hash(h));
+    tx.execute(
+        "INSERT INTO photos (id, inspection_id, attached_to, position, caption, file, content_hash, created_at)
+         VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)",
+        params![p.id, inspection_id, p.attached_to, position, p.caption, p.file, hash, created_at],
+    )?;
+    Ok(())
+}
+
+/// The kebab-case text serde gives a unit enum.
+pub fn text_of<T: serde::Serialize>(value: &T) -> Result<String> {
+    Ok(serde_json::to_value(value)?
+        .as_str()
+        .unwrap_or_default()
+        .to_string())
+}
