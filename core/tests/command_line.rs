@@ -316,3 +316,156 @@ fn rules_lists_every_id() {
         assert!(text.contains(id), "{id} missing");
     }
 }
+
+/// A temporary folder for a store, removed at the end.
+struct TempStore(PathBuf);
+
+impl TempStore {
+    fn new(name: &str) -> TempStore {
+        let dir = std::env::temp_dir().join(format!(
+            "undercroft-cli-store-{name}-{}",
+            std::process::id()
+        ));
+        std::fs::create_dir_all(&dir).unwrap();
+        TempStore(dir)
+    }
+    fn db(&self) -> String {
+        self.0.join("store.sqlite").display().to_string()
+    }
+}
+
+impl Drop for TempStore {
+    fn drop(&mut self) {
+        std::fs::remove_dir_all(&self.0).ok();
+    }
+}
+
+fn jpeg_file(dir: &std::path::Path) -> PathBuf {
+    let image = image::RgbImage::from_fn(800, 600, |x, y| {
+        image::Rgb([(x % 256) as u8, (y % 256) as u8, 90])
+    });
+    let mut png = Vec::new();
+    image::DynamicImage::ImageRgb8(image)
+        .write_to(&mut std::io::Cursor::new(&mut png), image::ImageFormat::Png)
+        .unwrap();
+    let path = dir.join("photo.png");
+    std::fs::write(&path, png).unwrap();
+    path
+}
+
+#[test]
+fn store_commands_from_import_to_export() {
+    let t = TempStore::new("flow");
+    let db = t.db();
+    let run = |args: &[&str]| {
+        let mut all = vec!["--db", db.as_str()];
+        all.extend_from_slice(args);
+        let o = undercroft(&all);
+        assert!(o.status.success(), "{args:?}: {}", stderr(&o));
+        stdout(&o)
+    };
+    assert!(run(&["import", &demo()]).starts_with("imported 0193a1c2-7d00-7000-8000-00000000d001"));
+    assert!(
+        run(&["import", &demo()]).starts_with("replaced"),
+        "importing twice does not duplicate"
+    );
+    let listed = run(&["list"]);
+    assert_eq!(listed.lines().count(), 1, "{listed}");
+    assert!(listed.contains("Zoë Ångström-Nguyễn"));
+    let id = run(&[
+        "new",
+        "--address",
+        "5 Oak Street",
+        "--date",
+        "2026-12-01",
+        "--room-use",
+        "sleeping",
+    ])
+    .trim()
+    .to_string();
+    assert_eq!(
+        run(&["list", "--search", "OAK"])
+            .lines()
+            .next()
+            .unwrap()
+            .split_whitespace()
+            .next(),
+        Some(id.as_str())
+    );
+    let photo = jpeg_file(&t.0);
+    let added = run(&[
+        "add-photo",
+        "obs-k7-notch",
+        photo.to_str().unwrap(),
+        "--caption",
+        "notch",
+    ]);
+    assert!(added.contains("photos/"), "{added}");
+    let findings = run(&[
+        "check",
+        "--inspection",
+        "0193a1c2-7d00-7000-8000-00000000d001",
+        "--json",
+    ]);
+    assert!(findings.contains("\"sawn-notch\""));
+    let bundle = t.0.join("out.zip");
+    run(&[
+        "export",
+        "0193a1c2-7d00-7000-8000-00000000d001",
+        "-o",
+        bundle.to_str().unwrap(),
+    ]);
+    let other = TempStore::new("flow-other");
+    let o = undercroft(&["--db", &other.db(), "import", bundle.to_str().unwrap()]);
+    assert!(stdout(&o).contains("(1 photos)"), "{}", stdout(&o));
+    let json = t.0.join("out.json");
+    run(&["export", &id, "-o", json.to_str().unwrap(), "--json"]);
+    assert!(std::fs::read_to_string(&json)
+        .unwrap()
+        .contains("5 Oak Street"));
+}
+
+#[test]
+fn store_commands_refuse_bad_input_clearly() {
+    let t = TempStore::new("bad");
+    let db = t.db();
+    let fail = |args: &[&str], expect: &str| {
+        let mut all = vec!["--db", db.as_str()];
+        all.extend_from_slice(args);
+        let o = undercroft(&all);
+        assert_eq!(o.status.code(), Some(2), "{args:?} succeeded");
+        assert!(stderr(&o).contains(expect), "{args:?}: {}", stderr(&o));
+    };
+    undercroft(&["--db", &db, "import", &demo()]);
+    let text = t.0.join("notes.txt");
+    std::fs::write(&text, "not a photo").unwrap();
+    fail(
+        &["add-photo", "obs-k7-notch", text.to_str().unwrap()],
+        "not an image",
+    );
+    fail(
+        &["add-photo", "no-such-owner", text.to_str().unwrap()],
+        "no inspection",
+    );
+    fail(&["check"], "give an inspection file or --inspection ID");
+    let zip = t.0.join("fake.zip");
+    std::fs::write(&zip, b"PK\x03\x04 not really a zip").unwrap();
+    fail(&["import", zip.to_str().unwrap()], "not a usable bundle");
+    fail(
+        &[
+            "export",
+            "no-such-id",
+            "-o",
+            t.0.join("x.zip").to_str().unwrap(),
+        ],
+        "no inspection",
+    );
+    let bad_db = t.0.join("bad.sqlite");
+    std::fs::write(&bad_db, vec![0x42u8; 4096]).unwrap();
+    let o = undercroft(&["--db", bad_db.to_str().unwrap(), "list"]);
+    assert!(
+        stderr(&o).contains("not an Undercroft database"),
+        "{}",
+        stderr(&o)
+    );
+}

@@ -2,17 +2,17 @@
 
 use std::time::{SystemTime, UNIX_EPOCH};
 
-/// "2026-12-01T23:40:12.123Z"
+/// "2026-12-01T23:40:12.123456Z": microseconds, so that edits a moment apart sort in order.
 pub fn now_utc() -> String {
     let since = SystemTime::now()
         .duration_since(UNIX_EPOCH)
         .unwrap_or_default();
-    format_utc(since.as_secs() as i64, since.subsec_millis())
+    format_utc(since.as_secs() as i64, since.subsec_micros())
 }
 
-/// Formats seconds since 1970 as a UTC timestamp. Days to civil date: H. Hinnant,
+/// Formats seconds and microseconds since 1970 as a UTC timestamp. Days to civil date: H. Hinnant,
 /// "chrono-Compatible Low-Level Date Algorithms" (civil_from_days).
-pub fn format_utc(secs: i64, millis: u32) -> String {
+pub fn format_utc(secs: i64, micros: u32) -> String {
     let days = secs.div_euclid(86_400);
     let rem = secs.rem_euclid(86_400);
     let z = days + 719_468;
@@ -25,7 +25,7 @@ pub fn format_utc(secs: i64, millis: u32) -> String {
     let month = if mp < 10 { mp + 3 } else { mp - 9 };
     let year = yoe + era * 400 + i64::from(month <= 2);
     format!(
-        "{year:04}-{month:02}-{day:02}T{:02}:{:02}:{:02}.{millis:03}Z",
+        "{year:04}-{month:02}-{day:02}T{:02}:{:02}:{:02}.{micros:06}Z",
         rem / 3600,
         rem % 3600 / 60,
         rem % 60
@@ -40,9 +40,9 @@ mod tests {
     // (a leap day); 0 = 1970-01-01 (`date -u -d @N`).
     #[test]
     fn known_instants() {
-        assert_eq!(format_utc(0, 0), "1970-01-01T00:00:00.000Z");
-        assert_eq!(format_utc(1_000_000_000, 5), "2001-09-09T01:46:40.005Z");
-        assert_eq!(format_utc(951_782_400, 0), "2000-02-29T00:00:00.000Z");
-        assert_eq!(format_utc(1_796_083_200, 0), "2026-12-01T00:00:00.000Z");
+        assert_eq!(format_utc(0, 0), "1970-01-01T00:00:00.000000Z");
+        assert_eq!(format_utc(1_000_000_000, 5), "2001-09-09T01:46:40.000005Z");
+        assert_eq!(format_utc(951_782_400, 0), "2000-02-29T00:00:00.000000Z");
+        assert_eq!(format_utc(1_796_083_200, 0), "2026-12-01T00:00:00.000000Z");
     }
 }

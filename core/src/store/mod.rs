@@ -33,13 +33,13 @@ pub enum StoreError {
     NotFound(String),
     #[error("{0}")]
     Invalid(String),
-    #[error("photo: {0}")]
+    #[error(transparent)]
     Photo(#[from] crate::photo::PhotoError),
-    #[error("database: {0}")]
+    #[error(transparent)]
     Sql(#[from] rusqlite::Error),
-    #[error("file: {0}")]
+    #[error(transparent)]
     Io(#[from] std::io::Error),
-    #[error("data: {0}")]
+    #[error(transparent)]
     Json(#[from] serde_json::Error),
 }
 

@@ -1,4 +1,5 @@
-//! `undercroft check FILE.json`: the findings of an inspection, for a terminal or as JSON.
+//! `undercroft check (FILE.json | --inspection ID)`: the findings of an inspection, for a
+//! terminal or as JSON.
 
 use anyhow::Context;
 use clap::Args;
@@ -11,17 +12,26 @@ use undercroft_core::{evaluate, Finding, Inspection, Status, SCREENING_NOTICE};
 #[derive(Args)]
 pub struct CheckArgs {
     /// An inspection file in the interchange format (docs/inspection-format.md).
-    file: PathBuf,
+    file: Option<PathBuf>,
+    /// The id of an inspection in the store instead of a file.
+    #[arg(long, conflicts_with = "file")]
+    inspection: Option<String>,
     /// Print one JSON object: the findings and the input problems.
     #[arg(long)]
     json: bool,
 }
 
-pub fn run(args: &CheckArgs) -> anyhow::Result<()> {
-    let bytes = std::fs::read(&args.file)
-        .with_context(|| format!("cannot read {}", args.file.display()))?;
-    let inspection = from_json_bytes(&bytes)
-        .with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
+pub fn run(args: &CheckArgs, db: Option<&std::path::Path>) -> anyhow::Result<()> {
+    let inspection = match (&args.file, &args.inspection) {
+        (Some(file), _) => {
+            let bytes =
+                std::fs::read(file).with_context(|| format!("cannot read {}", file.display()))?;
+            from_json_bytes(&bytes)
+                .with_context(|| format!("{} is not a usable inspection file", file.display()))?
+        }
+        (None, Some(id)) => crate::store_cmd::open(db)?.load_inspection(id)?,
+        (None, None) => anyhow::bail!("give an inspection file or --inspection ID"),
+    };
     let evaluation = evaluate(&inspection);
     if args.json {
         let out = json!({

@@ -4,6 +4,7 @@
 mod check_cmd;
 mod rules_cmd;
 mod span_cmd;
+mod store_cmd;
 
 use clap::{Parser, Subcommand};
 use std::process::ExitCode;
@@ -15,6 +16,9 @@ use std::process::ExitCode;
     about = "Checks wood floor framing against the residential code and wood mechanics (a screening tool)"
 )]
 struct Cli {
+    /// The store's database file (default: the platform's data folder).
+    #[arg(long, global = true)]
+    db: Option<std::path::PathBuf>,
     #[command(subcommand)]
     command: Command,
 }
@@ -23,8 +27,18 @@ struct Cli {
 enum Command {
     /// Allowable span of a sawn joist: each check's span and which governs.
     Span(span_cmd::SpanArgs),
-    /// The findings of an inspection file.
+    /// The findings of an inspection file, or of an inspection in the store.
     Check(check_cmd::CheckArgs),
+    /// Inspections in the store, most recently changed first.
+    List(store_cmd::ListArgs),
+    /// Start an inspection in the store.
+    New(store_cmd::NewArgs),
+    /// Import an inspection file (.json) or bundle (.zip) into the store.
+    Import(store_cmd::ImportArgs),
+    /// Export an inspection from the store as a bundle (.zip) or an inspection file (--json).
+    Export(store_cmd::ExportArgs),
+    /// Add a photo to an area, run, member or observation of a stored inspection.
+    AddPhoto(store_cmd::AddPhotoArgs),
     /// The rules the engine applies, with their ids and citations.
     Rules,
 }
@@ -33,8 +47,13 @@ fn main() -> ExitCode {
     let cli = Cli::parse();
     let result = match cli.command {
         Command::Span(args) => span_cmd::run(&args),
-        Command::Check(args) => check_cmd::run(&args),
+        Command::Check(args) => check_cmd::run(&args, cli.db.as_deref()),
         Command::Rules => rules_cmd::run(),
+        Command::List(args) => store_cmd::list(&args, cli.db.as_deref()),
+        Command::New(args) => store_cmd::new(&args, cli.db.as_deref()),
+        Command::Import(args) => store_cmd::import(&args, cli.db.as_deref()),
+        Command::Export(args) => store_cmd::export(&args, cli.db.as_deref()),
+        Command::AddPhoto(args) => store_cmd::add_photo(&args, cli.db.as_deref()),
     };
     match result {
         Ok(()) => ExitCode::SUCCESS,

@@ -1,0 +1,97 @@
+//! Benchmark: photo import per photo, single-threaded, against libjpeg-turbo's
+//! `djpeg -scale 1/2` on the same files as the floor (target: 1.5 x the floor or less).
+//!
+//! Photos: `python3 ../shared/bench/make_photos.py --n 20 --seed 1 --out /tmp/photos20`, then
+//! `UNDERCROFT_BENCH_PHOTOS=/tmp/photos20 cargo bench -p undercroft-core --bench photo_import`.
+//! Also times `Store::add_photo` (hashing, the three files written durably, the row).
+
+use std::path::PathBuf;
+use std::process::Command;
+use std::time::{Duration, Instant};
+use undercroft_core::photo;
+use undercroft_core::store::Store;
+
+fn median(mut v: Vec<Duration>) -> Duration {
+    v.sort();
+    v[v.len() / 2]
+}
+
+fn djpeg(path: &std::path::Path) -> Option<Duration> {
+    let start = Instant::now();
+    let status = Command::new("djpeg")
+        .args(["-scale", "1/2", "-outfile", "/dev/null"])
+        .arg(path)
+        .status()
+        .ok()?;
+    status.success().then(|| start.elapsed())
+}
+
+fn main() {
+    let quick = !std::env::args().any(|a| a == "--bench");
+    let Some(dir) = std::env::var_os("UNDERCROFT_BENCH_PHOTOS").map(PathBuf::from) else {
+        println!("photo_import: set UNDERCROFT_BENCH_PHOTOS to a folder of make_photos.py output to measure");
+        return;
+    };
+    let mut files: Vec<PathBuf> = std::fs::read_dir(&dir)
+        .expect("photo folder")
+        .flatten()
+        .map(|e| e.path())
+        .filter(|p| p.extension().is_some_and(|e| e == "jpg"))
+        .collect();
+    files.sort();
+    if quick {
+        files.truncate(2);
+    }
+    let photos: Vec<Vec<u8>> = files.iter().map(|p| std::fs::read(p).unwrap()).collect();
+    let mb = photos.iter().map(Vec::len).sum::<usize>() as f64 / photos.len() as f64 / 1e6;
+    println!("{} photos, {mb:.1} MB each on average", photos.len());
+
+    let floor_start: Vec<Duration> = files.iter().filter_map(|p| djpeg(p)).collect();
+    // Warm-up, then one pass timing each photo.
+    let _ = photo::process(&photos[0]);
+    let mut times = Vec::new();
+    let mut report_bytes = 0usize;
+    for bytes in &photos {
+        let start = Instant::now();
+        let out = photo::process(bytes).expect("imports");
+        times.push(start.elapsed());
+        report_bytes += out.report_jpeg.len();
+    }
+    let floor_end: Vec<Duration> = files.iter().filter_map(|p| djpeg(p)).collect();
+    let ours = median(times);
+    println!("import (decode 1/2 scale, resize, orient, encode report + thumb): median {ours:.1?}");
+    println!(
+        "report image average {:.0} KB",
+        report_bytes as f64 / photos.len() as f64 / 1e3
+    );
+    if floor_start.is_empty() {
+        println!("djpeg not found (Debian: libjpeg-turbo-progs): no floor");
+    } else {
+        let (a, b) = (median(floor_start), median(floor_end));
+        let floor = (a + b) / 2;
+        println!("floor djpeg -scale 1/2 (process included): median {a:.1?} before, {b:.1?} after");
+        println!(
+            "ratio {:.2} x the floor (target 1.5 or less)",
+            ours.as_secs_f64() / floor.as_secs_f64()
+        );
+    }
+
+    let dir = std::env::temp_dir().join(format!("undercroft-photo-bench-{}", std::process::id()));
+    let mut store = Store::open(&dir.join("bench.sqlite")).unwrap();
+    let inspection = undercroft_core::interchange::from_json(include_str!(
+        "../../demo-data/demo-inspection.json"
+    ))
+    .unwrap();
+    store.import_inspection(&inspection).unwrap();
+    let mut times = Vec::new();
+    for bytes in &photos {
+        let start = Instant::now();
+        store.add_photo("obs-k7-notch", bytes, "bench").unwrap();
+        times.push(start.elapsed());
+    }
+    println!(
+        "Store::add_photo (import + hash + 3 files synced + row): median {:.1?}",
+        median(times)
+    );
+    std::fs::remove_dir_all(&dir).ok();
+}

@@ -1,0 +1,159 @@
+//! The store's subcommands: list, new, import, export, add-photo.
+
+use anyhow::{bail, Context};
+use clap::Args;
+use std::path::{Path, PathBuf};
+use undercroft_core::interchange::{from_json_bytes, to_json};
+use undercroft_core::model::RoomUse;
+use undercroft_core::store::{ListFilter, NewInspection, Store};
+
+/// Opens the store at `--db`, or in the platform's data folder.
+pub fn open(db: Option<&Path>) -> anyhow::Result<Store> {
+    let path = match db {
+        Some(p) => p.to_path_buf(),
+        None => Store::default_path().context("no data folder on this platform; give --db PATH")?,
+    };
+    Store::open(&path).with_context(|| format!("cannot open the store at {}", path.display()))
+}
+
+#[derive(Args)]
+pub struct ListArgs {
+    /// Only inspections whose address or client contains this text.
+    #[arg(long, default_value = "")]
+    search: String,
+    /// Include archived inspections.
+    #[arg(long)]
+    all: bool,
+}
+
+pub fn list(args: &ListArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    let store = open(db)?;
+    let rows = store.list_inspections(&ListFilter {
+        search: args.search.clone(),
+        include_archived: args.all,
+    })?;
+    if rows.is_empty() {
+        println!("No inspections.");
+    }
+    for r in rows {
+        let archived = if r.archived { "  (archived)" } else { "" };
+        println!(
+            "{}  {}  {}  {}{archived}",
+            r.id, r.date, r.address, r.client_name
+        );
+    }
+    Ok(())
+}
+
+#[derive(Args)]
+pub struct NewArgs {
+    #[arg(long)]
+    address: String,
+    #[arg(long, default_value = "")]
+    client: String,
+    /// Date of the visit, YYYY-MM-DD.
+    #[arg(long)]
+    date: String,
+    /// Room use above: living (40 psf) or sleeping (30 psf).
+    #[arg(long, default_value = "living")]
+    room_use: String,
+    /// Heavy finishes above (tile): 20 psf dead load.
+    #[arg(long)]
+    heavy_finish: bool,
+}
+
+pub fn new(args: &NewArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    let room_use = match args.room_use.trim().to_lowercase().as_str() {
+        "living" | "other" => RoomUse::Living,
+        "sleeping" | "bedroom" => RoomUse::Sleeping,
+        other => bail!("--room-use {other:?}: expected living or sleeping"),
+    };
+    let mut store = open(db)?;
+    let id = store.create_inspection(&NewInspection {
+        address: args.address.clone(),
+        client_name: args.client.clone(),
+        date: args.date.clone(),
+        room_use_above: Some(room_use),
+        heavy_finish: args.heavy_finish,
+        ..Default::default()
+    })?;
+    println!("{id}");
+    Ok(())
+}
+
+#[derive(Args)]
+pub struct ImportArgs {
+    /// An inspection file (.json) or a bundle (.zip).
+    file: PathBuf,
+}
+
+pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    let bytes = std::fs::read(&args.file)
+        .with_context(|| format!("cannot read {}", args.file.display()))?;
+    let mut store = open(db)?;
+    let outcome = if bytes.starts_with(b"PK") {
+        store
+            .import_bundle(&args.file)
+            .with_context(|| format!("{} is not a usable bundle", args.file.display()))?
+    } else {
+        let inspection = from_json_bytes(&bytes)
+            .with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
+        store.import_inspection(&inspection)?
+    };
+    let verb = if outcome.replaced {
+        "replaced"
+    } else {
+        "imported"
+    };
+    println!(
+        "{verb} {} ({} photos)",
+        outcome.inspection_id, outcome.photos
+    );
+    Ok(())
+}
+
+#[derive(Args)]
+pub struct ExportArgs {
+    /// The inspection's id (see `undercroft list`).
+    id: String,
+    /// Where to write.
+    #[arg(short, long)]
+    output: PathBuf,
+    /// Write the inspection file (JSON, no photos) instead of a bundle.
+    #[arg(long)]
+    json: bool,
+}
+
+pub fn export(args: &ExportArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    let store = open(db)?;
+    if args.json {
+        let inspection = store.export_inspection(&args.id)?;
+        std::fs::write(&args.output, to_json(&inspection))
+            .with_context(|| format!("cannot write {}", args.output.display()))?;
+    } else {
+        store.export_bundle(&args.id, &args.output)?;
+    }
+    println!("wrote {}", args.output.display());
+    Ok(())
+}
+
+#[derive(Args)]
+pub struct AddPhotoArgs {
+    /// The id of the area, run, member or observation the photo belongs to.
+    owner: String,
+    /// A JPEG or PNG file.
+    file: PathBuf,
+    #[arg(long, default_value = "")]
+    caption: String,
+}
+
+pub fn add_photo(args: &AddPhotoArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    let bytes = std::fs::read(&args.file)
+        .with_context(|| format!("cannot read {}", args.file.display()))?;
+    let mut store = open(db)?;
+    let photo = store
+        .add_photo(&args.owner, &bytes, &args.caption)
+        .with_context(|| format!("{} was not added", args.file.display()))?;
+    println!("{} {}", photo.id, photo.file);
+    Ok(())
+}
