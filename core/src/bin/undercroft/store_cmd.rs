@@ -7,6 +7,20 @@ use undercroft_core::interchange::{from_json_bytes, to_json};
 use undercroft_core::model::RoomUse;
 use undercroft_core::store::{ListFilter, NewInspection, Store};
 
+/// Refuses a file larger than `limit` before reading it into memory.
+fn refuse_if_larger(path: &Path, limit: u64, what: &str) -> anyhow::Result<()> {
+    let size = std::fs::metadata(path)
+        .with_context(|| format!("cannot read {}", path.display()))?
+        .len();
+    if size > limit {
+        bail!(
+            "{} is {size} bytes, too large for {what} (at most {limit})",
+            path.display()
+        );
+    }
+    Ok(())
+}
+
 /// Opens the store at `--db`, or in the platform's data folder.
 pub fn open(db: Option<&Path>) -> anyhow::Result<Store> {
     let path = match db {
@@ -88,17 +102,26 @@ pub struct ImportArgs {
 }
 
 pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
-    let bytes = std::fs::read(&args.file)
-        .with_context(|| format!("cannot read {}", args.file.display()))?;
-    let mut store = open(db)?;
-    let outcome = if bytes.starts_with(b"PK") {
-        store
+    let mut head = [0u8; 2];
+    let is_zip = std::fs::File::open(&args.file)
+        .and_then(|mut f| std::io::Read::read_exact(&mut f, &mut head))
+        .map(|_| head == *b"PK")
+        .unwrap_or(false);
+    let outcome = if is_zip {
+        open(db)?
             .import_bundle(&args.file)
             .with_context(|| format!("{} is not a usable bundle", args.file.display()))?
     } else {
+        refuse_if_larger(
+            &args.file,
+            undercroft_core::interchange::MAX_FILE_BYTES as u64,
+            "an inspection file",
+        )?;
+        let bytes = std::fs::read(&args.file)
+            .with_context(|| format!("cannot read {}", args.file.display()))?;
         let inspection = from_json_bytes(&bytes)
             .with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
-        store.import_inspection(&inspection)?
+        open(db)?.import_inspection(&inspection)?
     };
     let verb = if outcome.replaced {
         "replaced"
@@ -148,6 +171,11 @@ pub struct AddPhotoArgs {
 }
 
 pub fn add_photo(args: &AddPhotoArgs, db: Option<&Path>) -> anyhow::Result<()> {
+    refuse_if_larger(
+        &args.file,
+        undercroft_core::photo::MAX_FILE_BYTES as u64,
+        "a photo",
+    )?;
     let bytes = std::fs::read(&args.file)
         .with_context(|| format!("cannot read {}", args.file.display()))?;
     let mut store = open(db)?;
