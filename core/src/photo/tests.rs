@@ -49,7 +49,7 @@ fn upright_for_all_four_orientations_and_no_exif() {
         assert_eq!(out.orientation, orientation as u8);
         assert_eq!(
             (out.report_width, out.report_height),
-            (1600, 1200),
+            (1280, 960),
             "orientation {orientation}"
         );
         assert_eq!((out.thumb_width, out.thumb_height), (320, 240));
@@ -79,7 +79,7 @@ fn small_photos_are_not_enlarged_and_png_works() {
     assert_eq!((out.report_width, out.report_height), (800, 600));
     let out = process(&png(&upright_scene(2000, 1000))).unwrap();
     assert_eq!(out.format, SourceFormat::Png);
-    assert_eq!((out.report_width, out.report_height), (1600, 800));
+    assert_eq!((out.report_width, out.report_height), (1280, 640));
     assert!(is_red(patch(&decode(&out.report_jpeg), 0.25, 0.25)));
 }
 

@@ -17,7 +17,7 @@ pub use clock::now_utc;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::SCHEMA_VERSION;
 pub use notes::{DeliveredReport, FindingNote};
-pub use photos::StoredPhoto;
+pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
 
 use rusqlite::Connection;
 use std::path::{Path, PathBuf};

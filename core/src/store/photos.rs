@@ -11,6 +11,33 @@ use rusqlite::params;
 use std::collections::HashSet;
 use std::path::PathBuf;
 
+/// A photo run through the import pipeline, ready to store: pure work, so many can be
+/// prepared on several threads and stored one after another.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PreparedPhoto {
+    pub hash: String,
+    pub format: photo::SourceFormat,
+    /// None when the store already holds this content's images.
+    pub processed: Option<photo::ProcessedPhoto>,
+}
+
+/// Hashes and imports a photo (decode, resize, orient, encode) without touching the store.
+pub fn prepare_photo(bytes: &[u8]) -> Result<PreparedPhoto> {
+    let format = sniff(bytes).map_err(|e| {
+        if bytes.is_empty() {
+            photo::PhotoError::Empty
+        } else {
+            e
+        }
+    })?;
+    let processed = photo::process(bytes)?;
+    Ok(PreparedPhoto {
+        hash: content_hash(bytes),
+        format,
+        processed: Some(processed),
+    })
+}
+
 /// A stored photo with where its files are.
 #[derive(Debug, Clone, PartialEq)]
 pub struct StoredPhoto {
@@ -36,36 +63,46 @@ impl Store {
         bytes: &[u8],
         caption: &str,
     ) -> Result<PhotoRef> {
-        let inspection_id = self.inspection_of(attached_to)?;
-        if inspection_id == attached_to {
-            return Err(StoreError::Invalid(
-                "a photo belongs to an area, run, member or observation".into(),
-            ));
-        }
-        let format = sniff(bytes).map_err(|e| {
-            if bytes.is_empty() {
-                photo::PhotoError::Empty
-            } else {
-                e
-            }
-        })?;
+        self.check_owner(attached_to)?;
         let hash = content_hash(bytes);
-        let (width, height) = match self.existing_size(&hash)? {
-            Some(size) => size,
-            None => {
-                let processed = photo::process(bytes)?;
+        let prepared = match self.existing_size(&hash)? {
+            Some(_) => PreparedPhoto {
+                format: sniff(bytes)?,
+                hash,
+                processed: None,
+            },
+            None => prepare_photo(bytes)?,
+        };
+        self.add_prepared_photo(attached_to, bytes, &prepared, caption)
+    }
+
+    /// Stores a photo prepared by `prepare_photo` (which may run on other threads).
+    pub fn add_prepared_photo(
+        &mut self,
+        attached_to: &str,
+        bytes: &[u8],
+        prepared: &PreparedPhoto,
+        caption: &str,
+    ) -> Result<PhotoRef> {
+        let inspection_id = self.check_owner(attached_to)?;
+        let hash = &prepared.hash;
+        let (width, height) = match &prepared.processed {
+            Some(processed) => {
                 self.photos
-                    .put(Kind::Thumb, &hash, "jpg", &processed.thumb_jpeg)?;
+                    .put(Kind::Thumb, hash, "jpg", &processed.thumb_jpeg)?;
                 self.photos
-                    .put(Kind::Report, &hash, "jpg", &processed.report_jpeg)?;
+                    .put(Kind::Report, hash, "jpg", &processed.report_jpeg)?;
                 (processed.report_width, processed.report_height)
             }
+            None => self.existing_size(hash)?.ok_or_else(|| {
+                StoreError::Invalid("the photo's stored images are missing".into())
+            })?,
         };
         let original_ext = match self.keep_originals {
             KeepOriginals::Yes => {
                 self.photos
-                    .put(Kind::Original, &hash, format.extension(), bytes)?;
-                Some(format.extension())
+                    .put(Kind::Original, hash, prepared.format.extension(), bytes)?;
+                Some(prepared.format.extension())
             }
             KeepOriginals::No => None,
         };
@@ -87,6 +124,17 @@ impl Store {
             attached_to: attached_to.into(),
             caption: caption.into(),
         })
+    }
+
+    /// The inspection of a photo's owner, which must be an area, run, member or observation.
+    fn check_owner(&self, attached_to: &str) -> Result<String> {
+        let inspection_id = self.inspection_of(attached_to)?;
+        if inspection_id == attached_to {
+            return Err(StoreError::Invalid(
+                "a photo belongs to an area, run, member or observation".into(),
+            ));
+        }
+        Ok(inspection_id)
     }
 
     /// Size of an already stored report image of this content, if there is one.

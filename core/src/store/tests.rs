@@ -336,7 +336,7 @@ fn photos_are_stored_once_ordered_and_swept() {
     assert_eq!(photos[0].hash, photos[1].hash);
     assert_eq!(
         (photos[0].width, photos[0].height),
-        (Some(1200), Some(1600)),
+        (Some(960), Some(1280)),
         "upright: portrait"
     );
     // Two distinct photos: three files each (report, thumbnail, original).
