@@ -307,6 +307,15 @@ impl Finding {
     pub fn rule_id(&self) -> &'static str {
         self.rule.id
     }
+    /// A stable identity for notes kept on this finding: rule id / member id / observation id.
+    pub fn key(&self) -> String {
+        format!(
+            "{}/{}/{}",
+            self.rule.id,
+            self.place.member_id,
+            self.observation_id.as_deref().unwrap_or("-")
+        )
+    }
     pub fn title(&self) -> &'static str {
         self.rule.title
     }

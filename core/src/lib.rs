@@ -10,6 +10,7 @@ pub mod lumber;
 pub mod mechanics;
 pub mod model;
 pub mod photo;
+pub mod report;
 pub mod rules;
 mod serde_text;
 pub mod store;

@@ -11,6 +11,7 @@ mod lap;
 mod moisture;
 mod notch;
 mod sag;
+pub use sag::sag_of;
 mod shared;
 mod span_options;
 mod wood_damage;

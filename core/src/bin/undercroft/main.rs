@@ -2,6 +2,7 @@
 //! inspection file.
 
 mod check_cmd;
+mod report_cmd;
 mod rules_cmd;
 mod span_cmd;
 mod store_cmd;
@@ -39,6 +40,8 @@ enum Command {
     Export(store_cmd::ExportArgs),
     /// Add a photo to an area, run, member or observation of a stored inspection.
     AddPhoto(store_cmd::AddPhotoArgs),
+    /// Build the client report (PDF) of an inspection file or a stored inspection.
+    Report(report_cmd::ReportArgs),
     /// The rules the engine applies, with their ids and citations.
     Rules,
 }
@@ -49,6 +52,7 @@ fn main() -> ExitCode {
         Command::Span(args) => span_cmd::run(&args),
         Command::Check(args) => check_cmd::run(&args, cli.db.as_deref()),
         Command::Rules => rules_cmd::run(),
+        Command::Report(args) => report_cmd::run(&args, cli.db.as_deref()),
         Command::List(args) => store_cmd::list(&args, cli.db.as_deref()),
         Command::New(args) => store_cmd::new(&args, cli.db.as_deref()),
         Command::Import(args) => store_cmd::import(&args, cli.db.as_deref()),

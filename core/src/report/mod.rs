@@ -1,0 +1,11 @@
+//! The client report: first a plain `Report` value built from an inspection and its findings
+//! (sections, tables, findings, photo references, drawings as geometry), then a PDF printer
+//! that only renders that value.
+
+mod build;
+mod model;
+pub mod pdf;
+mod side_view;
+
+pub use build::{build_report, PhotoFiles, ReportInput};
+pub use model::*;
