@@ -37,7 +37,7 @@ pub fn build_report(input: &ReportInput) -> Report {
         .map(|area| {
             let ctxs: Vec<&MemberContext> = contexts
                 .iter()
-                .filter(|c| &*c.place.area_id == area.id)
+                .filter(|c| *c.place.area_id == area.id)
                 .collect();
             area_section(input, area, &ctxs, &notes, &mut placed)
         })
