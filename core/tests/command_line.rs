@@ -469,3 +469,55 @@ fn store_commands_refuse_bad_input_clearly() {
         stderr(&o)
     );
 }
+
+#[test]
+fn report_command_writes_a_pdf_and_records_the_delivery() {
+    let t = TempStore::new("report");
+    let db = t.db();
+    let pdf = t.0.join("file-report.pdf");
+    let o = undercroft(&[
+        "report",
+        &demo(),
+        "-o",
+        pdf.to_str().unwrap(),
+        "--paper",
+        "a4",
+    ]);
+    assert!(o.status.success(), "{}", stderr(&o));
+    let bytes = std::fs::read(&pdf).unwrap();
+    assert!(bytes.starts_with(b"%PDF-") && bytes.len() > 10_000);
+    undercroft(&["--db", &db, "import", &demo()]);
+    let stored = t.0.join("stored-report.pdf");
+    let o = undercroft(&[
+        "--db",
+        &db,
+        "report",
+        "--inspection",
+        "0193a1c2-7d00-7000-8000-00000000d001",
+        "-o",
+        stored.to_str().unwrap(),
+    ]);
+    assert!(o.status.success(), "{}", stderr(&o));
+    let store = undercroft_core::store::Store::open(std::path::Path::new(&db)).unwrap();
+    let delivered = store
+        .reports("0193a1c2-7d00-7000-8000-00000000d001")
+        .unwrap();
+    assert_eq!(delivered.len(), 1);
+    assert_eq!(
+        delivered[0].bytes,
+        std::fs::metadata(&stored).unwrap().len()
+    );
+    let o = undercroft(&[
+        "report",
+        &demo(),
+        "-o",
+        pdf.to_str().unwrap(),
+        "--paper",
+        "legal",
+    ]);
+    assert!(
+        stderr(&o).contains("expected letter or a4"),
+        "{}",
+        stderr(&o)
+    );
+}

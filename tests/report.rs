@@ -1,0 +1,301 @@
+//! The client report: the report value pinned by a snapshot, and the PDF read back with
+//! poppler-utils and qpdf: every finding's citation and numbers in the text, every photo an
+//! embedded JPEG without EXIF, non-Latin names extractable, big reports build, both papers.
+
+use std::collections::HashSet;
+use std::path::{Path, PathBuf};
+use std::process::Command;
+use undercroft_core::interchange::from_json;
+use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+use undercroft_core::store::{FindingNote, Store};
+use undercroft_core::{evaluate, Inspection};
+use undercroft_tests::demo_path;
+
+struct Temp(PathBuf);
+
+impl Temp {
+    fn new(name: &str) -> Temp {
+        let dir =
+            std::env::temp_dir().join(format!("undercroft-report-{name}-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        Temp(dir)
+    }
+}
+
+impl Drop for Temp {
+    fn drop(&mut self) {
+        std::fs::remove_dir_all(&self.0).ok();
+    }
+}
+
+fn demo() -> Inspection {
+    from_json(&std::fs::read_to_string(demo_path()).unwrap()).unwrap()
+}
+
+/// A PNG photo with its own colours, `n` picking them.
+fn photo(n: u32, width: u32, height: u32) -> Vec<u8> {
+    let image = image::RgbImage::from_fn(width, height, |x, y| {
+        image::Rgb([
+            ((x * 7 + n * 40) % 256) as u8,
+            ((y * 5 + n * 90) % 256) as u8,
+            ((n * 23) % 256) as u8,
+        ])
+    });
+    let mut out = Vec::new();
+    image::DynamicImage::ImageRgb8(image)
+        .write_to(&mut std::io::Cursor::new(&mut out), image::ImageFormat::Png)
+        .unwrap();
+    out
+}
+
+fn tool(name: &str, args: &[&std::ffi::OsStr]) -> String {
+    let out = Command::new(name)
+        .args(args)
+        .output()
+        .unwrap_or_else(|e| panic!("{name} is needed (Debian: poppler-utils, qpdf): {e}"));
+    assert!(
+        out.status.success(),
+        "{name} failed: {}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    String::from_utf8_lossy(&out.stdout).into_owned()
+}
+
+fn normalise(text: &str) -> String {
+    text.split_whitespace().collect::<Vec<_>>().join(" ")
+}
+
+/// The demo in a store with photos on three findings and the area, and a note.
+fn demo_store(dir: &Path) -> (Store, Inspection) {
+    let mut store = Store::open(&dir.join("store.sqlite")).unwrap();
+    let inspection = demo();
+    store.import_inspection(&inspection).unwrap();
+    store
+        .add_photo(
+            "obs-k7-notch",
+            &photo(1, 1600, 1200),
+            "Notch at the drain line, seen by 李 Wei",
+        )
+        .unwrap();
+    store
+        .add_photo("obs-k7-notch", &photo(2, 1200, 1600), "Same notch, closer")
+        .unwrap();
+    store
+        .add_photo(
+            "obs-ij-cut",
+            &photo(3, 1600, 1200),
+            "Cut flange under the toilet",
+        )
+        .unwrap();
+    store
+        .add_photo(
+            "area-base",
+            &photo(4, 1600, 1200),
+            "Basement, looking north",
+        )
+        .unwrap();
+    store
+        .set_finding_note(
+            &inspection.id,
+            &FindingNote {
+                key: "sawn-notch/joist-k7/obs-k7-notch".into(),
+                note: "Owner says the drain was moved in 2019.".into(),
+                ..Default::default()
+            },
+        )
+        .unwrap();
+    let loaded = store.load_inspection(&inspection.id).unwrap();
+    (store, loaded)
+}
+
+fn render(store: &Store, inspection: &Inspection, paper: Paper) -> Vec<u8> {
+    let files: PhotoFiles = store
+        .photos_of_inspection(&inspection.id)
+        .unwrap()
+        .into_iter()
+        .filter_map(|p| p.report_path.map(|path| (p.id, path)))
+        .collect();
+    let notes = store.finding_notes(&inspection.id).unwrap();
+    let evaluation = evaluate(inspection);
+    pdf::render(&build_report(&ReportInput {
+        inspection,
+        evaluation: &evaluation,
+        notes: &notes,
+        photo_files: &files,
+        paper,
+    }))
+}
+
+#[test]
+fn report_value_snapshot() {
+    let inspection = demo();
+    let evaluation = evaluate(&inspection);
+    let report = build_report(&ReportInput {
+        inspection: &inspection,
+        evaluation: &evaluation,
+        notes: &[],
+        photo_files: &PhotoFiles::new(),
+        paper: Paper::Letter,
+    });
+    insta::assert_json_snapshot!(report);
+}
+
+#[test]
+fn pdf_holds_every_finding_photo_and_name() {
+    let t = Temp::new("readback");
+    let (store, inspection) = demo_store(&t.0);
+    let bytes = render(&store, &inspection, Paper::Letter);
+    let path = t.0.join("report.pdf");
+    std::fs::write(&path, &bytes).unwrap();
+    tool("qpdf", &["--check".as_ref(), path.as_os_str()]);
+
+    let text = normalise(&tool("pdftotext", &[path.as_os_str(), "-".as_ref()]));
+    for name in [
+        "Zoë Ångström-Nguyễn",
+        "李 Wei",
+        "2719 Quillback Road, Marrow Falls",
+        "IRC 2018",
+        "licensed professional",
+        "Owner says the drain was moved in 2019.",
+    ] {
+        assert!(text.contains(name), "{name:?} not in the text");
+    }
+    for f in evaluate(&inspection).findings {
+        let citation = normalise(&f.citation());
+        assert!(
+            text.contains(&citation),
+            "citation {citation:?} of {} missing",
+            f.rule_id()
+        );
+        if let (Some(m), Some(l)) = (f.measured(), f.limit()) {
+            assert!(
+                text.contains(&normalise(&m.text)),
+                "measured {} of {} missing",
+                m.text,
+                f.rule_id()
+            );
+            assert!(
+                text.contains(&normalise(&l.text)),
+                "limit {} of {} missing",
+                l.text,
+                f.rule_id()
+            );
+        }
+        if let Some(u) = f.use_text() {
+            assert!(text.contains(&u), "use {u} of {} missing", f.rule_id());
+        }
+    }
+
+    // Four distinct photos, each embedded once as a JPEG.
+    let list = tool("pdfimages", &["-list".as_ref(), path.as_os_str()]);
+    let images: Vec<&str> = list.lines().skip(2).collect();
+    assert_eq!(images.len(), 4, "{list}");
+    assert!(
+        images
+            .iter()
+            .all(|l| l.split_whitespace().nth(2) == Some("image")
+                && l.split_whitespace().nth(8) == Some("jpeg")),
+        "{list}"
+    );
+    let out = t.0.join("img");
+    tool(
+        "pdfimages",
+        &["-j".as_ref(), path.as_os_str(), out.as_os_str()],
+    );
+    let stored: HashSet<Vec<u8>> = store
+        .photos_of_inspection(&inspection.id)
+        .unwrap()
+        .into_iter()
+        .map(|p| std::fs::read(p.report_path.unwrap()).unwrap())
+        .collect();
+    let mut extracted = 0;
+    for entry in std::fs::read_dir(&t.0).unwrap().flatten() {
+        let name = entry.file_name().to_string_lossy().into_owned();
+        if name.starts_with("img") && name.ends_with(".jpg") {
+            let jpeg = std::fs::read(entry.path()).unwrap();
+            assert!(
+                !jpeg.windows(6).any(|w| w == b"Exif\0\0"),
+                "{name} carries EXIF"
+            );
+            assert!(
+                stored.contains(&jpeg),
+                "{name} is not byte-identical to a stored report image"
+            );
+            extracted += 1;
+        }
+    }
+    assert_eq!(extracted, 4);
+}
+
+#[test]
+fn letter_and_a4() {
+    let t = Temp::new("paper");
+    let (store, inspection) = demo_store(&t.0);
+    for (paper, expect) in [
+        (Paper::Letter, "612 x 792 pts (letter)"),
+        (Paper::A4, "595.276 x 841.89 pts (A4)"),
+    ] {
+        let path = t.0.join("paper.pdf");
+        std::fs::write(&path, render(&store, &inspection, paper)).unwrap();
+        let info = tool("pdfinfo", &[path.as_os_str()]);
+        assert!(info.contains(expect), "{info}");
+        let pages: usize = info
+            .lines()
+            .find_map(|l| l.strip_prefix("Pages:"))
+            .unwrap()
+            .trim()
+            .parse()
+            .unwrap();
+        let text = tool("pdftotext", &[path.as_os_str(), "-".as_ref()]);
+        assert!(
+            text.contains(&format!("Page {pages} of {pages}")),
+            "page numbers"
+        );
+        assert_eq!(
+            text.matches("2719 Quillback Road, Marrow Falls - wood floor framing screening")
+                .count(),
+            pages,
+            "the property on every page"
+        );
+    }
+}
+
+#[test]
+fn two_hundred_findings_and_three_hundred_photos_build() {
+    let t = Temp::new("big");
+    let mut store = Store::open(&t.0.join("store.sqlite")).unwrap();
+    let inspection = undercroft_core::generate::inspection_with_members(60);
+    store.import_inspection(&inspection).unwrap();
+    let owners: Vec<String> = inspection
+        .areas
+        .iter()
+        .flat_map(|a| &a.runs)
+        .flat_map(|r| &r.joists)
+        .flat_map(|j| j.observations.iter().map(|o| o.id.to_string()))
+        .collect();
+    for n in 0..300u32 {
+        let owner = &owners[n as usize % owners.len()];
+        store
+            .add_photo(
+                owner,
+                &photo(n, 96, 72),
+                &format!(
+                    "Photo {n} of a long series, with a caption that runs on for a while to wrap"
+                ),
+            )
+            .unwrap();
+    }
+    let inspection = store.load_inspection(&inspection.id).unwrap();
+    let findings = evaluate(&inspection).findings.len();
+    assert!(findings >= 200, "{findings} findings");
+    let bytes = render(&store, &inspection, Paper::A4);
+    let path = t.0.join("big.pdf");
+    std::fs::write(&path, &bytes).unwrap();
+    tool("qpdf", &["--check".as_ref(), path.as_os_str()]);
+    let list = tool("pdfimages", &["-list".as_ref(), path.as_os_str()]);
+    assert_eq!(
+        list.lines().skip(2).count(),
+        300,
+        "every photo embedded once"
+    );
+}
