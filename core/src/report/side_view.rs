@@ -48,7 +48,8 @@ pub fn side_view(
                 depth: d, length, ..
             } => {
                 if let Some(r) = notch_rect(kind, depth, Some(span)) {
-                    let label = format!("notch {} x {}", dim(*d), dim(*length));
+                    let at = format_length(crate::units::Length::inches(r.x0.max(0.0)), ctx.units);
+                    let label = format!("notch {} x {} at {at}", dim(*d), dim(*length));
                     view.notches.push(ViewRect {
                         x0: r.x0,
                         x1: r.x1,
@@ -61,7 +62,8 @@ pub fn side_view(
             }
             kind @ ObservationKind::Hole { diameter, .. } => {
                 if let Some(c) = hole_circle(kind, Some(span)) {
-                    let label = format!("hole {}", dim(*diameter));
+                    let at = format_length(crate::units::Length::inches(c.x), ctx.units);
+                    let label = format!("hole {} at {at}", dim(*diameter));
                     view.holes.push(ViewCircle {
                         x: c.x,
                         y: c.y,
