@@ -177,6 +177,19 @@ fn area_section(
                 .total_cmp(&a.ratio().unwrap_or(0.0)),
         )
     });
+    // Options to discuss follow the over-span they are about.
+    let options: Vec<&Finding> = findings
+        .iter()
+        .copied()
+        .filter(|f| f.rule_id() == "span-options")
+        .collect();
+    findings.retain(|f| f.rule_id() != "span-options");
+    for o in options {
+        let after = findings
+            .iter()
+            .position(|f| f.rule_id() == "joist-span" && f.place.member_id == o.place.member_id);
+        findings.insert(after.map_or(findings.len(), |p| p + 1), o);
+    }
     let blocks = findings
         .iter()
         .map(|f| {
