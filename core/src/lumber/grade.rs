@@ -88,12 +88,7 @@ impl fmt::Display for Grade {
 impl FromStr for GradeChoice {
     type Err = String;
     fn from_str(text: &str) -> Result<Self, String> {
-        let key: String = text
-            .trim()
-            .to_lowercase()
-            .chars()
-            .filter(|c| c.is_alphanumeric())
-            .collect();
+        let key = super::typed_key(text);
         let grade = match key.as_str() {
             "ss" | "selectstructural" | "sel" | "selstr" => Grade::SelectStructural,
             "1" | "no1" | "number1" => Grade::No1,

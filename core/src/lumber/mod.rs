@@ -14,3 +14,13 @@ pub use factors::{
 pub use grade::{Grade, GradeChoice, UNKNOWN_GRADE_DEFAULT};
 pub use size::{NominalSize, Section, SizeError};
 pub use species::Species;
+
+/// What a user typed for a species or grade, reduced to lower-case letters and digits, so
+/// "DF-L", "df l" and "dfl" read alike.
+fn typed_key(text: &str) -> String {
+    text.trim()
+        .to_lowercase()
+        .chars()
+        .filter(|c| c.is_alphanumeric())
+        .collect()
+}

@@ -65,12 +65,7 @@ impl fmt::Display for Species {
 impl FromStr for Species {
     type Err = String;
     fn from_str(text: &str) -> Result<Self, String> {
-        let key: String = text
-            .trim()
-            .to_lowercase()
-            .chars()
-            .filter(|c| c.is_alphanumeric())
-            .collect();
+        let key = super::typed_key(text);
         match key.as_str() {
             "dfl" | "df" | "douglasfirlarch" | "douglasfir" | "dfir" => {
                 Ok(Species::DouglasFirLarch)

@@ -13,71 +13,72 @@ pub enum Owner<'a> {
     Member(&'a str),
 }
 
+/// The header columns, in the order both statements below name them.
+const HEADER_COLUMNS: &str =
+    "format_version, address, year_built, client_name, client_email, client_phone,
+    inspector_name, inspector_company, inspector_license, visit_date, conditions, code_edition,
+    local_amendments, units, loads, search_key";
+
+/// Values of `HEADER_COLUMNS` for an inspection.
+fn header_values(i: &Inspection) -> Result<Vec<rusqlite::types::Value>> {
+    use rusqlite::types::Value::{Integer, Null, Text};
+    Ok(vec![
+        Integer(i.version.into()),
+        Text(i.property.address.clone()),
+        i.property.year_built.map_or(Null, |y| Integer(y.into())),
+        Text(i.client.name.clone()),
+        Text(i.client.email.clone()),
+        Text(i.client.phone.clone()),
+        Text(i.inspector.name.clone()),
+        Text(i.inspector.company.clone()),
+        Text(i.inspector.license.clone()),
+        Text(i.date.clone()),
+        Text(i.conditions.clone()),
+        Text(i.code_edition.clone()),
+        Text(i.local_amendments.clone()),
+        Text(text_of(&i.units)?),
+        Text(serde_json::to_string(&i.loads)?),
+        Text(search_key(&i.property.address, &i.client.name)),
+    ])
+}
+
 pub fn insert_header(
     tx: &Transaction,
     i: &Inspection,
     created_at: &str,
     updated_at: &str,
 ) -> Result<()> {
-    tx.execute(
-        "INSERT INTO inspections (id, format_version, address, year_built, client_name, client_email, client_phone,
-            inspector_name, inspector_company, inspector_license, visit_date, conditions, code_edition,
-            local_amendments, units, loads, created_at, updated_at, search_key)
-         VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, ?18, ?19)",
-        params![
-            i.id,
-            i.version,
-            i.property.address,
-            i.property.year_built,
-            i.client.name,
-            i.client.email,
-            i.client.phone,
-            i.inspector.name,
-            i.inspector.company,
-            i.inspector.license,
-            i.date,
-            i.conditions,
-            i.code_edition,
-            i.local_amendments,
-            serde_json::to_value(i.units)?.as_str().unwrap_or("imperial"),
-            serde_json::to_string(&i.loads)?,
-            created_at,
-            updated_at,
-            search_key(&i.property.address, &i.client.name),
-        ],
-    )?;
+    let mut values = header_values(i)?;
+    let placeholders: Vec<String> = (1..=values.len() + 3).map(|n| format!("?{n}")).collect();
+    values.extend([
+        i.id.clone().into(),
+        created_at.to_string().into(),
+        updated_at.to_string().into(),
+    ]);
+    let sql = format!(
+        "INSERT INTO inspections ({HEADER_COLUMNS}, id, created_at, updated_at) VALUES ({})",
+        placeholders.join(", ")
+    );
+    tx.execute(&sql, rusqlite::params_from_iter(values))?;
     Ok(())
 }
 
 /// Rewrites the header fields (everything but areas and photos).
 pub fn update_header(tx: &Transaction, i: &Inspection, updated_at: &str) -> Result<usize> {
-    Ok(tx.execute(
-        "UPDATE inspections SET format_version = ?2, address = ?3, year_built = ?4, client_name = ?5,
-            client_email = ?6, client_phone = ?7, inspector_name = ?8, inspector_company = ?9,
-            inspector_license = ?10, visit_date = ?11, conditions = ?12, code_edition = ?13,
-            local_amendments = ?14, units = ?15, loads = ?16, updated_at = ?17, search_key = ?18
-         WHERE id = ?1",
-        params![
-            i.id,
-            i.version,
-            i.property.address,
-            i.property.year_built,
-            i.client.name,
-            i.client.email,
-            i.client.phone,
-            i.inspector.name,
-            i.inspector.company,
-            i.inspector.license,
-            i.date,
-            i.conditions,
-            i.code_edition,
-            i.local_amendments,
-            serde_json::to_value(i.units)?.as_str().unwrap_or("imperial"),
-            serde_json::to_string(&i.loads)?,
-            updated_at,
-            search_key(&i.property.address, &i.client.name),
-        ],
-    )?)
+    let mut values = header_values(i)?;
+    let sets: Vec<String> = HEADER_COLUMNS
+        .split(',')
+        .enumerate()
+        .map(|(n, c)| format!("{} = ?{}", c.trim(), n + 1))
+        .collect();
+    let sql = format!(
+        "UPDATE inspections SET {}, updated_at = ?{} WHERE id = ?{}",
+        sets.join(", "),
+        values.len() + 1,
+        values.len() + 2
+    );
+    values.extend([updated_at.to_string().into(), i.id.clone().into()]);
+    Ok(tx.execute(&sql, rusqlite::params_from_iter(values))?)
 }
 
 pub fn insert_area(
