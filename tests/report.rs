@@ -299,3 +299,33 @@ fn two_hundred_findings_and_three_hundred_photos_build() {
         "every photo embedded once"
     );
 }
+
+#[test]
+fn hostile_text_still_makes_a_sound_report() {
+    let t = Temp::new("hostile");
+    let mut inspection = demo();
+    inspection.property.address =
+        format!("{} 李 🏠\u{0}\t\r end", "Very long address ".repeat(600));
+    inspection.client.name = "Zoë\u{202E}reversed\u{200B}".into();
+    inspection.conditions = "wet\n\n\nvery wet ".repeat(400);
+    inspection.areas[0].name = "x".repeat(5000);
+    inspection.areas[0].notes = "李".repeat(3000);
+    let evaluation = evaluate(&inspection);
+    let report = build_report(&ReportInput {
+        inspection: &inspection,
+        evaluation: &evaluation,
+        notes: &[],
+        photo_files: &PhotoFiles::new(),
+        paper: Paper::A4,
+    });
+    let bytes = pdf::render(&report);
+    let path = t.0.join("hostile.pdf");
+    std::fs::write(&path, &bytes).unwrap();
+    tool("qpdf", &["--check".as_ref(), path.as_os_str()]);
+    let text = tool("pdftotext", &[path.as_os_str(), "-".as_ref()]);
+    assert!(text.contains("李李李"), "CJK notes extract");
+    assert!(
+        text.contains("very wet"),
+        "long conditions wrap onto the page"
+    );
+}

@@ -428,14 +428,18 @@ impl Writer {
     }
 }
 
-/// Shortens text with an ellipsis to fit `max` points.
+/// Shortens text with an ellipsis to fit `max` points (linear in the text's length).
 pub fn fit(text: &str, size: f32, style: Face, max: f32) -> String {
     if fonts::width(text, size, style) <= max {
         return text.to_string();
     }
-    let mut out: String = String::new();
+    let room = max - fonts::width("...", size, style);
+    let mut used = 0.0;
+    let mut out = String::new();
+    let mut buf = [0u8; 4];
     for c in text.chars() {
-        if fonts::width(&format!("{out}{c}..."), size, style) > max {
+        used += fonts::width(c.encode_utf8(&mut buf), size, style);
+        if used > room {
             break;
         }
         out.push(c);
