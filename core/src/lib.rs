@@ -3,6 +3,7 @@
 
 pub mod engine;
 pub mod finding;
+pub mod forms;
 pub mod generate;
 pub mod geometry;
 pub mod interchange;

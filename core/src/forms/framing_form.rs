@@ -1,0 +1,316 @@
+//! The fields of a joist run or member as typed, to and from the model's `Framing`.
+
+use crate::lumber::{GradeChoice, NominalSize, Species};
+use crate::model::{
+    ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
+};
+use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
+use serde::{Deserialize, Serialize};
+
+/// One field's problem, named so the screen can show it beside the field.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct FieldError {
+    pub field: &'static str,
+    pub message: String,
+}
+
+/// A run's or member's framing as the inspector typed or picked it. Empty means not entered.
+#[derive(Debug, Clone, PartialEq, Default, Serialize, Deserialize)]
+pub struct FramingForm {
+    /// `sawn` (or empty), `i-joist`, `composite-lumber`, `floor-truss`, `glulam`.
+    pub kind: String,
+    pub species: String,
+    /// A grade, or `none` when no stamp is visible.
+    pub grade: String,
+    /// Nominal size such as `2x10`.
+    pub size: String,
+    /// Measured section for rough-sawn lumber, such as `2 x 10`.
+    pub actual: String,
+    /// Inches when no unit is typed (mm in metric).
+    pub spacing: String,
+    /// Feet when no unit is typed (mm in metric): `15' 2"`, `15-2`, `15`.
+    pub clear_span: String,
+    /// Inches when no unit is typed (mm in metric).
+    pub bearing_length: String,
+    /// `wood`, `metal`, `masonry`, `concrete`, `hanger`, `ribbon`, `ledger`.
+    pub bearing_on: String,
+    /// `rim-joist`, `solid-blocking`, `header`, `stud`, `none`.
+    pub end_restraint: String,
+    /// `none`, `solid-blocking`, `diagonal`, `strap`.
+    pub bridging: String,
+    /// Feet when no unit is typed (mm in metric).
+    pub bridging_interval: String,
+}
+
+/// Inches per unit assumed for a bare number in a field: short lengths in inches, spans in
+/// feet; millimetres in metric.
+fn bare_unit(units: UnitSystem, long: bool) -> f64 {
+    match (units, long) {
+        (UnitSystem::Metric, _) => 1.0 / 25.4,
+        (UnitSystem::Imperial, true) => 12.0,
+        (UnitSystem::Imperial, false) => 1.0,
+    }
+}
+
+fn enum_from<T: serde::de::DeserializeOwned>(text: &str) -> Option<T> {
+    serde_json::from_value(serde_json::Value::String(text.trim().to_string())).ok()
+}
+
+fn enum_text<T: Serialize>(value: &T) -> String {
+    serde_json::to_value(value)
+        .ok()
+        .and_then(|v| v.as_str().map(str::to_string))
+        .unwrap_or_default()
+}
+
+impl FramingForm {
+    /// The form showing a stored framing, lengths written the way a tape reads.
+    pub fn from_framing(f: &Framing, units: UnitSystem) -> FramingForm {
+        let short = |l: Option<Length>| l.map(|l| format_dimension(l, units)).unwrap_or_default();
+        let long = |l: Option<Length>| l.map(|l| format_length(l, units)).unwrap_or_default();
+        FramingForm {
+            kind: f.kind.map(|k| enum_text(&k)).unwrap_or_default(),
+            species: f.species.map(|s| s.key().to_string()).unwrap_or_default(),
+            grade: f.grade.map(|g| g.key().to_string()).unwrap_or_default(),
+            size: f.size.map(|s| s.to_string()).unwrap_or_default(),
+            actual: f
+                .actual
+                .map(|a| {
+                    format!(
+                        "{} x {}",
+                        format_dimension(a.thickness, units),
+                        format_dimension(a.depth, units)
+                    )
+                })
+                .unwrap_or_default(),
+            spacing: short(f.spacing),
+            clear_span: long(f.clear_span),
+            bearing_length: short(f.bearing.and_then(|b| b.length)),
+            bearing_on: f.bearing.map(|b| enum_text(&b.on)).unwrap_or_default(),
+            end_restraint: f.end_restraint.map(|r| enum_text(&r)).unwrap_or_default(),
+            bridging: f.bridging.map(|b| enum_text(&b.kind)).unwrap_or_default(),
+            bridging_interval: long(f.bridging.and_then(|b| b.interval)),
+        }
+    }
+
+    /// The model's framing, and a problem for each field that could not be read (that field
+    /// is left out; nothing else is lost).
+    pub fn to_framing(&self, units: UnitSystem) -> (Framing, Vec<FieldError>) {
+        let mut errors = Vec::new();
+        let mut fail =
+            |field: &'static str, message: String| errors.push(FieldError { field, message });
+        let mut framing = Framing::default();
+        let filled = |t: &str| !t.trim().is_empty();
+
+        if filled(&self.kind) {
+            match enum_from::<MemberKind>(&self.kind) {
+                Some(k) => framing.kind = Some(k),
+                None => fail(
+                    "kind",
+                    format!("unknown member kind \"{}\"", self.kind.trim()),
+                ),
+            }
+        }
+        if filled(&self.species) {
+            match self.species.parse::<Species>() {
+                Ok(s) => framing.species = Some(s),
+                Err(e) => fail("species", e),
+            }
+        }
+        if filled(&self.grade) {
+            match self.grade.parse::<GradeChoice>() {
+                Ok(g) => framing.grade = Some(g),
+                Err(e) => fail("grade", e),
+            }
+        }
+        if filled(&self.size) {
+            match self.size.parse::<NominalSize>() {
+                Ok(s) => framing.size = Some(s),
+                Err(e) => fail("size", e.to_string()),
+            }
+        }
+        if filled(&self.actual) {
+            match crate::lumber::Section::measured(&self.actual, framing.size) {
+                Ok(s) => {
+                    framing.actual = Some(ActualSize {
+                        thickness: s.thickness,
+                        depth: s.depth,
+                    })
+                }
+                Err(e) => fail("actual", e.to_string()),
+            }
+        }
+        let mut length = |field: &'static str, text: &str, long: bool| -> Option<Length> {
+            if !filled(text) {
+                return None;
+            }
+            match parse_length(text, Some(bare_unit(units, long))) {
+                Ok(l) => Some(l),
+                Err(e) => {
+                    fail(field, e.to_string());
+                    None
+                }
+            }
+        };
+        framing.spacing = length("spacing", &self.spacing, false);
+        framing.clear_span = length("clear_span", &self.clear_span, true);
+        let bearing_length = length("bearing_length", &self.bearing_length, false);
+        let interval = length("bridging_interval", &self.bridging_interval, true);
+        if filled(&self.bearing_on) {
+            match enum_from::<BearingSupport>(&self.bearing_on) {
+                Some(on) => {
+                    framing.bearing = Some(Bearing {
+                        length: bearing_length,
+                        on,
+                    })
+                }
+                None => fail(
+                    "bearing_on",
+                    format!("unknown support \"{}\"", self.bearing_on.trim()),
+                ),
+            }
+        } else if bearing_length.is_some() {
+            fail("bearing_on", "pick what the joists bear on".into());
+        }
+        if filled(&self.end_restraint) {
+            match enum_from::<EndRestraint>(&self.end_restraint) {
+                Some(r) => framing.end_restraint = Some(r),
+                None => fail(
+                    "end_restraint",
+                    format!("unknown end restraint \"{}\"", self.end_restraint.trim()),
+                ),
+            }
+        }
+        if filled(&self.bridging) {
+            match enum_from::<BridgingKind>(&self.bridging) {
+                Some(kind) => framing.bridging = Some(Bridging { kind, interval }),
+                None => fail(
+                    "bridging",
+                    format!("unknown bridging \"{}\"", self.bridging.trim()),
+                ),
+            }
+        }
+        (framing, errors)
+    }
+
+    /// Fills every empty field from the previous run's form (one tap: "same as before").
+    pub fn fill_from(&mut self, previous: &FramingForm) {
+        let pairs: [(&mut String, &String); 12] = [
+            (&mut self.kind, &previous.kind),
+            (&mut self.species, &previous.species),
+            (&mut self.grade, &previous.grade),
+            (&mut self.size, &previous.size),
+            (&mut self.actual, &previous.actual),
+            (&mut self.spacing, &previous.spacing),
+            (&mut self.clear_span, &previous.clear_span),
+            (&mut self.bearing_length, &previous.bearing_length),
+            (&mut self.bearing_on, &previous.bearing_on),
+            (&mut self.end_restraint, &previous.end_restraint),
+            (&mut self.bridging, &previous.bridging),
+            (&mut self.bridging_interval, &previous.bridging_interval),
+        ];
+        for (mine, theirs) in pairs {
+            if mine.trim().is_empty() {
+                *mine = theirs.clone();
+            }
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn typed() -> FramingForm {
+        FramingForm {
+            species: "SPF".into(),
+            grade: "#2".into(),
+            size: "2x10".into(),
+            spacing: "16".into(),
+            clear_span: "16' 0\"".into(),
+            bearing_length: "1-1/2".into(),
+            bearing_on: "wood".into(),
+            end_restraint: "rim-joist".into(),
+            ..Default::default()
+        }
+    }
+
+    #[test]
+    fn typed_values_become_the_model_and_back() {
+        let (framing, errors) = typed().to_framing(UnitSystem::Imperial);
+        assert!(errors.is_empty(), "{errors:?}");
+        assert_eq!(framing.clear_span, Some(Length::inches(192.0)));
+        assert_eq!(framing.spacing, Some(Length::inches(16.0)));
+        assert_eq!(
+            framing.bearing,
+            Some(Bearing {
+                length: Some(Length::inches(1.5)),
+                on: BearingSupport::Wood
+            })
+        );
+        let shown = FramingForm::from_framing(&framing, UnitSystem::Imperial);
+        assert_eq!(
+            (
+                shown.clear_span.as_str(),
+                shown.spacing.as_str(),
+                shown.species.as_str()
+            ),
+            ("16' 0\"", "16\"", "spruce-pine-fir")
+        );
+        assert_eq!(shown.to_framing(UnitSystem::Imperial).0, framing);
+    }
+
+    #[test]
+    fn bare_numbers_take_the_fields_unit() {
+        let form = FramingForm {
+            clear_span: "15-2".into(),
+            spacing: "19.2".into(),
+            ..Default::default()
+        };
+        let (f, _) = form.to_framing(UnitSystem::Imperial);
+        assert_eq!(f.clear_span, Some(Length::inches(182.0)));
+        let form = FramingForm {
+            clear_span: "15".into(),
+            ..Default::default()
+        };
+        assert_eq!(
+            form.to_framing(UnitSystem::Imperial).0.clear_span,
+            Some(Length::inches(180.0))
+        );
+        let metric = FramingForm {
+            clear_span: "4150".into(),
+            spacing: "406".into(),
+            ..Default::default()
+        };
+        let (f, _) = metric.to_framing(UnitSystem::Metric);
+        assert!((f.clear_span.unwrap().in_millimetres() - 4150.0).abs() < 1e-9);
+    }
+
+    #[test]
+    fn each_bad_field_is_named_and_the_rest_kept() {
+        let mut form = typed();
+        form.species = "oak".into();
+        form.clear_span = "13''7".into();
+        form.grade = "utility".into();
+        let (framing, errors) = form.to_framing(UnitSystem::Imperial);
+        let fields: Vec<_> = errors.iter().map(|e| e.field).collect();
+        assert_eq!(fields, ["species", "grade", "clear_span"]);
+        assert_eq!(
+            framing.size,
+            Some(NominalSize::new(2, 10)),
+            "good fields survive"
+        );
+        assert!(framing.clear_span.is_none());
+    }
+
+    #[test]
+    fn copy_the_previous_run() {
+        let mut next = FramingForm {
+            clear_span: "12' 6\"".into(),
+            ..Default::default()
+        };
+        next.fill_from(&typed());
+        assert_eq!(next.species, "SPF");
+        assert_eq!(next.clear_span, "12' 6\"", "what was typed stays");
+    }
+}

@@ -1,0 +1,9 @@
+//! Form state for the app's screens, as plain structs: what the inspector typed (text), how
+//! it becomes the model (with an error per field), and the live check of a joist run while it
+//! is being typed. No UI code: the app's components only read and call these.
+
+mod framing_form;
+mod live_check;
+
+pub use framing_form::{FieldError, FramingForm};
+pub use live_check::{live_check, LiveCheck};
