@@ -34,7 +34,7 @@ pub fn sniff(bytes: &[u8]) -> Result<SourceFormat, PhotoError> {
                 PhotoError::Unsupported("HEIC/HEIF")
             }
             b"avif" | b"avis" => PhotoError::Unsupported("AVIF"),
-            _ => PhotoError::Unsupported("video or ISO media"),
+            _ => PhotoError::Unsupported("MP4, MOV or other ISO media"),
         });
     }
     if bytes.starts_with(b"GIF8") {
