@@ -193,6 +193,48 @@ impl FramingForm {
         (framing, errors)
     }
 
+    /// Sets one field by its name (the names `FieldError` uses); unknown names change nothing.
+    pub fn set(&mut self, field: &str, value: String) {
+        let slot = match field {
+            "kind" => &mut self.kind,
+            "species" => &mut self.species,
+            "grade" => &mut self.grade,
+            "size" => &mut self.size,
+            "actual" => &mut self.actual,
+            "spacing" => &mut self.spacing,
+            "clear_span" => &mut self.clear_span,
+            "bearing_length" => &mut self.bearing_length,
+            "bearing_on" => &mut self.bearing_on,
+            "end_restraint" => &mut self.end_restraint,
+            "bridging" => &mut self.bridging,
+            "bridging_interval" => &mut self.bridging_interval,
+            _ => return,
+        };
+        *slot = value;
+    }
+
+    /// What to save while the inspector is typing: the form's framing, except that a field
+    /// that does not read yet keeps its stored value (nothing saved is lost to a keystroke).
+    pub fn merged_with(&self, stored: &Framing, units: UnitSystem) -> (Framing, Vec<FieldError>) {
+        let (mut framing, errors) = self.to_framing(units);
+        for e in &errors {
+            match e.field {
+                "kind" => framing.kind = stored.kind,
+                "species" => framing.species = stored.species,
+                "grade" => framing.grade = stored.grade,
+                "size" => framing.size = stored.size,
+                "actual" => framing.actual = stored.actual,
+                "spacing" => framing.spacing = stored.spacing,
+                "clear_span" => framing.clear_span = stored.clear_span,
+                "bearing_length" | "bearing_on" => framing.bearing = stored.bearing,
+                "end_restraint" => framing.end_restraint = stored.end_restraint,
+                "bridging" | "bridging_interval" => framing.bridging = stored.bridging,
+                _ => {}
+            }
+        }
+        (framing, errors)
+    }
+
     /// Fills every empty field from the previous run's form (one tap: "same as before").
     pub fn fill_from(&mut self, previous: &FramingForm) {
         let pairs: [(&mut String, &String); 12] = [
@@ -301,6 +343,24 @@ mod tests {
             "good fields survive"
         );
         assert!(framing.clear_span.is_none());
+    }
+
+    #[test]
+    fn a_half_typed_field_keeps_the_stored_value() {
+        let (stored, _) = typed().to_framing(UnitSystem::Imperial);
+        let mut form = typed();
+        form.clear_span = "16-".into();
+        form.spacing = String::new();
+        let (merged, errors) = form.merged_with(&stored, UnitSystem::Imperial);
+        assert_eq!(errors[0].field, "clear_span");
+        assert_eq!(
+            merged.clear_span, stored.clear_span,
+            "kept while the entry does not read"
+        );
+        assert_eq!(
+            merged.spacing, None,
+            "a field emptied on purpose is emptied"
+        );
     }
 
     #[test]

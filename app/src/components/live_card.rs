@@ -1,0 +1,22 @@
+//! The live check card of a run: allowable span, use of it, what governs.
+
+use super::StatusBadge;
+use dioxus::prelude::*;
+use undercroft_core::forms::LiveCheck;
+
+#[component]
+pub fn LiveCard(check: LiveCheck) -> Element {
+    let governing = check
+        .governing
+        .map(|g| g.name().to_string())
+        .unwrap_or_default();
+    rsx! {
+        div { class: "card", id: "live-check",
+            StatusBadge { status: check.status, use_text: check.use_text.clone() }
+            p { "{check.message}" }
+            if let Some(allowable) = &check.allowable {
+                p { class: "muted", "Allowable span {allowable}; {governing} governs" }
+            }
+        }
+    }
+}

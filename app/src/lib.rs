@@ -1,0 +1,24 @@
+//! Undercroft's app: routes, screens and widgets. Components hold no business logic: they read
+//! state and call plain structs from `undercroft-core` (the store, the framing form, the live
+//! check, the engine).
+
+pub mod components;
+pub mod route;
+pub mod state;
+pub mod style;
+pub mod views;
+
+pub use route::Route;
+pub use state::{use_app, AppState};
+
+use dioxus::prelude::*;
+
+/// The whole app: the shared state is provided by the caller (see `Root`).
+#[component]
+pub fn App() -> Element {
+    rsx! {
+        style { {style::CSS} }
+        div { class: "notice", "Screening tool, not an engineering evaluation. Local codes govern; refer structural concerns to a licensed professional." }
+        Router::<Route> {}
+    }
+}

@@ -1,0 +1,23 @@
+//! The app's screens and their addresses.
+
+use crate::views::{AreaView, Findings, InspectionView, Inspections, RunView};
+use dioxus::prelude::*;
+
+#[derive(Routable, Clone, PartialEq, Debug)]
+pub enum Route {
+    /// Inspections, newest first; search; start one.
+    #[route("/")]
+    Inspections {},
+    /// One inspection: its areas and what is over a limit in each.
+    #[route("/inspection/:id")]
+    InspectionView { id: String },
+    /// One area: its joist runs and single members.
+    #[route("/area/:id")]
+    AreaView { id: String },
+    /// One joist run: its framing, checked live as it is typed.
+    #[route("/run/:id")]
+    RunView { id: String },
+    /// Every finding of an inspection, over limit first.
+    #[route("/inspection/:id/findings")]
+    Findings { id: String },
+}

@@ -1,0 +1,25 @@
+//! The app's one stylesheet: large tap targets, high contrast, a dark scheme for dim light.
+
+pub const CSS: &str = r#"
+:root { --ink: #111; --paper: #fff; --muted: #555; --line: #bbb; --over: #9e1a1a; --near: #8a5a00; --ok: #1d5e2c; }
+@media (prefers-color-scheme: dark) {
+  :root { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
+}
+body { margin: 0; font: 18px/1.4 system-ui, sans-serif; color: var(--ink); background: var(--paper); }
+main { padding: 12px 14px 80px; max-width: 720px; margin: 0 auto; }
+h1 { font-size: 24px; margin: 8px 0 12px; } h2 { font-size: 20px; margin: 18px 0 8px; }
+a, button, .tap { min-height: 48px; min-width: 48px; }
+button, .button { font: inherit; padding: 10px 16px; border-radius: 8px; border: 2px solid var(--ink); background: var(--ink); color: var(--paper); }
+button.quiet { background: transparent; color: var(--ink); }
+input, select, textarea { font: inherit; width: 100%; box-sizing: border-box; min-height: 48px; padding: 8px 10px; border: 2px solid var(--line); border-radius: 8px; background: var(--paper); color: var(--ink); }
+label { display: block; margin: 10px 0 4px; font-weight: 600; }
+.field-error { color: var(--over); font-weight: 600; }
+ul.list { list-style: none; padding: 0; margin: 0; }
+ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(--line); color: var(--ink); text-decoration: none; }
+.muted { color: var(--muted); font-size: 15px; }
+.card { border: 2px solid var(--line); border-radius: 10px; padding: 10px 12px; margin: 12px 0; }
+.status { font-weight: 700; }
+.status-over-limit { color: var(--over); } .status-near-limit { color: var(--near); } .status-within { color: var(--ok); }
+.notice { font-size: 13px; padding: 4px 14px; color: var(--muted); border-bottom: 1px solid var(--line); }
+nav.back { margin: 4px 0; }
+"#;

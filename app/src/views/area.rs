@@ -1,0 +1,86 @@
+//! One area: its joist runs and single members; add a run, copying the previous one's values.
+
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::model::JoistRun;
+use undercroft_core::store::new_id;
+
+#[component]
+pub fn AreaView(id: String) -> Element {
+    let app = use_app();
+    let mut label = use_signal(String::new);
+    let mut copy = use_signal(|| true);
+    let mut error = use_signal(|| None::<String>);
+    let found = {
+        let store = app.store.borrow();
+        store
+            .inspection_of(&id)
+            .and_then(|i| store.load_inspection(&i))
+    };
+    let Some((inspection, area)) = found
+        .ok()
+        .and_then(|i| i.areas.iter().find(|a| a.id == id).cloned().map(|a| (i, a)))
+    else {
+        return rsx! { main { p { "This area is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
+    };
+    let previous = area.runs.last().map(|r| r.framing.clone());
+    let area_id = id.clone();
+    let add = {
+        let app = app.clone();
+        move |_| {
+            let text = label();
+            let run = JoistRun {
+                id: new_id(),
+                label: if text.trim().is_empty() {
+                    "Joist run".into()
+                } else {
+                    text
+                },
+                framing: if copy() {
+                    previous.clone().unwrap_or_default()
+                } else {
+                    Default::default()
+                },
+                observations: vec![],
+                joists: vec![],
+            };
+            match app.change(|s| s.add_run(&area_id, &run)) {
+                Ok(()) => {
+                    navigator().push(Route::RunView { id: run.id });
+                }
+                Err(e) => error.set(Some(e)),
+            }
+        }
+    };
+    rsx! {
+        main {
+            nav { class: "back", Link { to: Route::InspectionView { id: inspection.id.clone() }, "< {inspection.property.address}" } }
+            h1 { "{area.name}" }
+            h2 { "Joist runs" }
+            ul { class: "list",
+                for run in area.runs.iter() {
+                    li { key: "{run.id}", Link { to: Route::RunView { id: run.id.clone() }, "{run.label}" } }
+                }
+            }
+            if !area.members.is_empty() {
+                h2 { "Single members" }
+                ul { class: "list",
+                    for m in area.members.iter() {
+                        li { key: "{m.id}", span { "{m.label}" } }
+                    }
+                }
+            }
+            h2 { "Add a joist run" }
+            label { r#for: "run-label", "Label" }
+            input { id: "run-label", placeholder: "Joists between the rim and the girder", value: "{label}", oninput: move |e| label.set(e.value()) }
+            label {
+                input { r#type: "checkbox", checked: copy(), onchange: move |e| copy.set(e.checked()), style: "width:auto;min-height:auto" }
+                " Same values as the previous run"
+            }
+            if let Some(e) = error() {
+                p { class: "field-error", "{e}" }
+            }
+            button { id: "add-run", onclick: add, "Add run" }
+        }
+    }
+}

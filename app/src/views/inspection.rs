@@ -1,0 +1,94 @@
+//! One inspection: its areas, each with a count of what is over a limit; add an area.
+
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::model::{Area, AreaKind};
+use undercroft_core::store::new_id;
+use undercroft_core::{evaluate, Status};
+
+#[component]
+pub fn InspectionView(id: String) -> Element {
+    let app = use_app();
+    let mut name = use_signal(String::new);
+    let mut kind = use_signal(|| "crawlspace".to_string());
+    let mut error = use_signal(|| None::<String>);
+    let loaded = app.store.borrow().load_inspection(&id);
+    let Ok(inspection) = loaded else {
+        return rsx! { main { p { "This inspection is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
+    };
+    let evaluation = evaluate(&inspection);
+    let over_in = |area_id: &str| {
+        evaluation
+            .findings
+            .iter()
+            .filter(|f| &*f.place.area_id == area_id && f.status == Status::OverLimit)
+            .count()
+    };
+    let areas: Vec<(String, String, usize)> = inspection
+        .areas
+        .iter()
+        .map(|a| (a.id.clone(), a.name.clone(), over_in(&a.id)))
+        .collect();
+    let inspection_id = id.clone();
+    let add = {
+        let app = app.clone();
+        move |_| {
+            let kind: AreaKind =
+                serde_json::from_value(serde_json::Value::String(kind())).unwrap_or_default();
+            let area = Area {
+                id: new_id(),
+                name: name(),
+                kind,
+                loads: Default::default(),
+                runs: vec![],
+                members: vec![],
+                notes: String::new(),
+            };
+            if area.name.trim().is_empty() {
+                error.set(Some("Name the area first.".into()));
+                return;
+            }
+            match app.change(|s| s.add_area(&inspection_id, &area)) {
+                Ok(()) => {
+                    navigator().push(Route::AreaView { id: area.id });
+                }
+                Err(e) => error.set(Some(e)),
+            }
+        }
+    };
+    let total_over = evaluation.count(Status::OverLimit);
+    rsx! {
+        main {
+            nav { class: "back", Link { to: Route::Inspections {}, "< Inspections" } }
+            h1 { "{inspection.property.address}" }
+            p { class: "muted", "{inspection.client.name} {inspection.date} {inspection.code_edition}" }
+            p { Link { to: Route::Findings { id: id.clone() }, id: "findings-link", "Findings: {total_over} over a limit" } }
+            h2 { "Areas" }
+            ul { class: "list",
+                for (area_id, area_name, over) in areas {
+                    li { key: "{area_id}",
+                        Link { to: Route::AreaView { id: area_id.clone() }, "{area_name}"
+                            br {}
+                            span { class: "muted", "{over} over a limit" }
+                        }
+                    }
+                }
+            }
+            h2 { "Add an area" }
+            label { r#for: "area-name", "Name" }
+            input { id: "area-name", placeholder: "Crawlspace under the kitchen", value: "{name}", oninput: move |e| name.set(e.value()) }
+            label { r#for: "area-kind", "Kind" }
+            select { id: "area-kind", value: "{kind}", onchange: move |e| kind.set(e.value()),
+                option { value: "crawlspace", "Crawlspace" }
+                option { value: "basement", "Basement" }
+                option { value: "garage", "Garage" }
+                option { value: "porch", "Porch" }
+                option { value: "other", "Other" }
+            }
+            if let Some(e) = error() {
+                p { class: "field-error", "{e}" }
+            }
+            button { id: "add-area", onclick: add, "Add area" }
+        }
+    }
+}

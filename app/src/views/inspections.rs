@@ -1,0 +1,89 @@
+//! Inspections, newest first, with search, and the form that starts one.
+
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::model::RoomUse;
+use undercroft_core::store::{ListFilter, NewInspection};
+
+#[component]
+pub fn Inspections() -> Element {
+    let app = use_app();
+    let mut search = use_signal(String::new);
+    let mut address = use_signal(String::new);
+    let mut client = use_signal(String::new);
+    let mut date = use_signal(String::new);
+    let mut room = use_signal(|| "living".to_string());
+    let mut heavy = use_signal(|| false);
+    let mut error = use_signal(|| None::<String>);
+    let list = app
+        .store
+        .borrow()
+        .list_inspections(&ListFilter {
+            search: search(),
+            include_archived: false,
+        })
+        .unwrap_or_default();
+    let start = {
+        let app = app.clone();
+        move |_| {
+            let new = NewInspection {
+                address: address(),
+                client_name: client(),
+                date: date(),
+                room_use_above: Some(if room() == "sleeping" {
+                    RoomUse::Sleeping
+                } else {
+                    RoomUse::Living
+                }),
+                heavy_finish: heavy(),
+                ..Default::default()
+            };
+            match app.change(|s| s.create_inspection(&new)) {
+                Ok(id) => {
+                    navigator().push(Route::InspectionView { id });
+                }
+                Err(e) => error.set(Some(e)),
+            }
+        }
+    };
+    rsx! {
+        main {
+            h1 { "Inspections" }
+            input { r#type: "search", id: "search", placeholder: "Search address or client", value: "{search}", oninput: move |e| search.set(e.value()) }
+            if list.is_empty() {
+                p { class: "muted", "No inspections yet." }
+            }
+            ul { class: "list",
+                for s in list {
+                    li { key: "{s.id}",
+                        Link { to: Route::InspectionView { id: s.id.clone() },
+                            "{s.address}"
+                            br {}
+                            span { class: "muted", "{s.client_name} {s.date}" }
+                        }
+                    }
+                }
+            }
+            h2 { "Start an inspection" }
+            label { r#for: "new-address", "Property address" }
+            input { id: "new-address", value: "{address}", oninput: move |e| address.set(e.value()) }
+            label { r#for: "new-client", "Client" }
+            input { id: "new-client", value: "{client}", oninput: move |e| client.set(e.value()) }
+            label { r#for: "new-date", "Date" }
+            input { id: "new-date", r#type: "date", value: "{date}", oninput: move |e| date.set(e.value()) }
+            label { r#for: "new-room", "Rooms above" }
+            select { id: "new-room", value: "{room}", onchange: move |e| room.set(e.value()),
+                option { value: "living", "Living areas (40 psf)" }
+                option { value: "sleeping", "Sleeping rooms (30 psf)" }
+            }
+            label {
+                input { r#type: "checkbox", id: "new-heavy", checked: heavy(), onchange: move |e| heavy.set(e.checked()), style: "width:auto;min-height:auto" }
+                " Heavy finishes above (tile, stone): 20 psf dead load"
+            }
+            if let Some(e) = error() {
+                p { class: "field-error", "{e}" }
+            }
+            button { id: "start-inspection", onclick: start, "Start inspection" }
+        }
+    }
+}

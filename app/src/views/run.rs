@@ -1,0 +1,113 @@
+//! One joist run: its framing as typed, saved on every change, with the live check card.
+
+use crate::components::LiveCard;
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::forms::{live_check, FramingForm};
+
+/// The pick lists: the trade's choices, so nothing needs typing that a tap can pick.
+const SPECIES: [(&str, &str); 4] = [
+    ("spruce-pine-fir", "Spruce-pine-fir"),
+    ("douglas-fir-larch", "Douglas fir-larch"),
+    ("hem-fir", "Hem-fir"),
+    ("southern-pine", "Southern pine"),
+];
+const GRADES: [(&str, &str); 5] = [
+    ("select-structural", "Select Structural"),
+    ("no1", "No. 1"),
+    ("no2", "No. 2"),
+    ("no3", "No. 3"),
+    ("none", "No stamp visible"),
+];
+const SIZES: [&str; 6] = ["2x4", "2x6", "2x8", "2x10", "2x12", "2x14"];
+const SUPPORTS: [(&str, &str); 7] = [
+    ("wood", "Wood"),
+    ("metal", "Metal"),
+    ("masonry", "Masonry"),
+    ("concrete", "Concrete"),
+    ("hanger", "Joist hanger"),
+    ("ribbon", "Ribbon strip"),
+    ("ledger", "Ledger strip"),
+];
+
+#[component]
+pub fn RunView(id: String) -> Element {
+    let app = use_app();
+    let found = {
+        let store = app.store.borrow();
+        store
+            .inspection_of(&id)
+            .and_then(|i| store.load_inspection(&i))
+    };
+    let Some((inspection, area, run)) = found.ok().and_then(|i| {
+        i.areas
+            .iter()
+            .find_map(|a| {
+                a.runs
+                    .iter()
+                    .find(|r| r.id == id)
+                    .map(|r| (a.clone(), r.clone()))
+            })
+            .map(|(a, r)| (i, a, r))
+    }) else {
+        return rsx! { main { p { "This run is not in the store." } } };
+    };
+    let units = inspection.units;
+    let stored = run.framing.clone();
+    let mut form = use_signal(|| FramingForm::from_framing(&stored, units));
+    let mut errors = use_signal(Vec::new);
+    let loads = area.loads.resolve(&inspection.loads);
+    let check = live_check(&form(), &loads, units);
+    let run_id = id.clone();
+    let label = run.label.clone();
+    // Every change is saved the moment it is made; a field that does not read yet keeps its
+    // stored value.
+    let save = use_callback(move |(field, value): (&'static str, String)| {
+        form.with_mut(|f| f.set(field, value));
+        let (framing, field_errors) = form().merged_with(&stored, units);
+        errors.set(field_errors);
+        if let Err(e) = app.change(|s| s.update_run(&run_id, &label, &framing)) {
+            errors.set(vec![undercroft_core::forms::FieldError {
+                field: "save",
+                message: e,
+            }]);
+        }
+    });
+    let f = form();
+    rsx! {
+        main {
+            nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
+            h1 { "{run.label}" }
+            LiveCard { check }
+            label { r#for: "species", "Species" }
+            select { id: "species", value: "{f.species}", onchange: move |e| save.call(("species", e.value())),
+                option { value: "", "Pick" }
+                for (key, name) in SPECIES { option { value: key, "{name}" } }
+            }
+            label { r#for: "grade", "Grade (from the stamp)" }
+            select { id: "grade", value: "{f.grade}", onchange: move |e| save.call(("grade", e.value())),
+                option { value: "", "Pick" }
+                for (key, name) in GRADES { option { value: key, "{name}" } }
+            }
+            label { r#for: "size", "Size" }
+            select { id: "size", value: "{f.size}", onchange: move |e| save.call(("size", e.value())),
+                option { value: "", "Pick" }
+                for size in SIZES { option { value: size, "{size}" } }
+            }
+            label { r#for: "spacing", "Spacing, inches on centre" }
+            input { id: "spacing", inputmode: "decimal", value: "{f.spacing}", oninput: move |e| save.call(("spacing", e.value())) }
+            label { r#for: "clear-span", "Clear span (15' 2\", 15-2 or 15)" }
+            input { id: "clear-span", inputmode: "text", autocomplete: "off", value: "{f.clear_span}", oninput: move |e| save.call(("clear_span", e.value())) }
+            label { r#for: "bearing-on", "Ends bear on" }
+            select { id: "bearing-on", value: "{f.bearing_on}", onchange: move |e| save.call(("bearing_on", e.value())),
+                option { value: "", "Pick" }
+                for (key, name) in SUPPORTS { option { value: key, "{name}" } }
+            }
+            label { r#for: "bearing-length", "Bearing length, inches" }
+            input { id: "bearing-length", inputmode: "decimal", value: "{f.bearing_length}", oninput: move |e| save.call(("bearing_length", e.value())) }
+            for e in errors() {
+                p { class: "field-error", "{e.field}: {e.message}" }
+            }
+        }
+    }
+}
