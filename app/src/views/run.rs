@@ -82,17 +82,17 @@ pub fn RunView(id: String) -> Element {
             label { r#for: "species", "Species" }
             select { id: "species", value: "{f.species}", onchange: move |e| save.call(("species", e.value())),
                 option { value: "", "Pick" }
-                for (key, name) in SPECIES { option { value: key, "{name}" } }
+                for (key, name) in SPECIES { option { value: key, selected: f.species == key, "{name}" } }
             }
             label { r#for: "grade", "Grade (from the stamp)" }
             select { id: "grade", value: "{f.grade}", onchange: move |e| save.call(("grade", e.value())),
                 option { value: "", "Pick" }
-                for (key, name) in GRADES { option { value: key, "{name}" } }
+                for (key, name) in GRADES { option { value: key, selected: f.grade == key, "{name}" } }
             }
             label { r#for: "size", "Size" }
             select { id: "size", value: "{f.size}", onchange: move |e| save.call(("size", e.value())),
                 option { value: "", "Pick" }
-                for size in SIZES { option { value: size, "{size}" } }
+                for size in SIZES { option { value: size, selected: f.size == size, "{size}" } }
             }
             label { r#for: "spacing", "Spacing, inches on centre" }
             input { id: "spacing", inputmode: "decimal", value: "{f.spacing}", oninput: move |e| save.call(("spacing", e.value())) }
@@ -101,7 +101,7 @@ pub fn RunView(id: String) -> Element {
             label { r#for: "bearing-on", "Ends bear on" }
             select { id: "bearing-on", value: "{f.bearing_on}", onchange: move |e| save.call(("bearing_on", e.value())),
                 option { value: "", "Pick" }
-                for (key, name) in SUPPORTS { option { value: key, "{name}" } }
+                for (key, name) in SUPPORTS { option { value: key, selected: f.bearing_on == key, "{name}" } }
             }
             label { r#for: "bearing-length", "Bearing length, inches" }
             input { id: "bearing-length", inputmode: "decimal", value: "{f.bearing_length}", oninput: move |e| save.call(("bearing_length", e.value())) }
