@@ -1,6 +1,6 @@
 //! The app's screens and their addresses.
 
-use crate::views::{AreaView, Findings, InspectionView, Inspections, RunView};
+use crate::views::{AreaView, Findings, InspectionView, Inspections, ObservationView, RunView};
 use dioxus::prelude::*;
 
 #[derive(Routable, Clone, PartialEq, Debug)]
@@ -17,6 +17,14 @@ pub enum Route {
     /// One joist run: its framing, checked live as it is typed.
     #[route("/run/:id")]
     RunView { id: String },
+    /// One observation on a run or member (new when `id` is not stored yet): its fields,
+    /// the verdict with its citation, and the side view, live.
+    #[route("/observe/:owner/:kind/:id")]
+    ObservationView {
+        owner: String,
+        kind: String,
+        id: String,
+    },
     /// Every finding of an inspection, over limit first.
     #[route("/inspection/:id/findings")]
     Findings { id: String },

@@ -108,3 +108,23 @@ fn findings_over_limit_first_with_citations() {
     assert!(html.contains("IRC 2018 R502.8.1"));
     assert!(html.contains("licensed professional"));
 }
+
+// Source: IRC 2018 R502.8.1: the demo's 2 in notch in a 2x10 (limit d/6 = 1-9/16 in).
+#[test]
+fn observation_shows_verdict_citation_and_side_view() {
+    let html = render("/observe/joist-k7/notch/obs-k7-notch");
+    assert!(html.contains("OVER LIMIT 130 %"), "{html}");
+    assert!(html.contains("IRC 2018 R502.8.1"));
+    assert!(html.contains("<svg"), "the side view is drawn");
+    assert!(html.contains("middle third"));
+    let fresh = render("/observe/run-dining/notch/new-one");
+    assert!(fresh.contains("Distance from the support face"), "{fresh}");
+}
+
+#[test]
+fn run_lists_its_observations_and_the_kinds_to_add() {
+    let html = render("/run/run-dining");
+    assert!(html.contains("moisture reading"), "{html}");
+    assert!(html.contains("Pick what you saw"));
+    assert!(html.contains("Bored hole"));
+}

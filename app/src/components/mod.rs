@@ -1,7 +1,9 @@
 //! Reusable widgets.
 
 mod live_card;
+mod side_view;
 mod status_badge;
 
 pub use live_card::LiveCard;
+pub use side_view::SideViewSvg;
 pub use status_badge::StatusBadge;

@@ -4,10 +4,12 @@ mod area;
 mod findings;
 mod inspection;
 mod inspections;
+mod observation;
 mod run;
 
 pub use area::AreaView;
 pub use findings::Findings;
 pub use inspection::InspectionView;
 pub use inspections::Inspections;
+pub use observation::ObservationView;
 pub use run::RunView;

@@ -3,7 +3,8 @@
 use crate::components::LiveCard;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FramingForm};
+use undercroft_core::forms::{live_check, FramingForm, ObservationForm, KINDS};
+use undercroft_core::store::new_id;
 
 /// The pick lists: the trade's choices, so nothing needs typing that a tap can pick.
 const SPECIES: [(&str, &str); 4] = [
@@ -74,6 +75,18 @@ pub fn RunView(id: String) -> Element {
         }
     });
     let f = form();
+    let observations: Vec<(String, String, String)> = run
+        .observations
+        .iter()
+        .map(|o| {
+            (
+                o.id.to_string(),
+                ObservationForm::from_observation(o, units).kind,
+                o.kind.name().to_string(),
+            )
+        })
+        .collect();
+    let owner = id.clone();
     rsx! {
         main {
             nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
@@ -107,6 +120,23 @@ pub fn RunView(id: String) -> Element {
             input { id: "bearing-length", inputmode: "decimal", value: "{f.bearing_length}", oninput: move |e| save.call(("bearing_length", e.value())) }
             for e in errors() {
                 p { class: "field-error", "{e.field}: {e.message}" }
+            }
+            h2 { "Observations on these joists" }
+            ul { class: "list",
+                for (oid, okind, oname) in observations {
+                    li { key: "{oid}", Link { to: Route::ObservationView { owner: id.clone(), kind: okind, id: oid.clone() }, "{oname}" } }
+                }
+            }
+            label { r#for: "add-observation", "Add an observation" }
+            select { id: "add-observation",
+                onchange: move |e| {
+                    let kind = e.value();
+                    if !kind.is_empty() {
+                        navigator().push(Route::ObservationView { owner: owner.clone(), kind, id: new_id() });
+                    }
+                },
+                option { value: "", "Pick what you saw" }
+                for (value, text) in KINDS.iter() { option { value: "{value}", "{text}" } }
             }
         }
     }

@@ -4,6 +4,10 @@
 
 mod framing_form;
 mod live_check;
+mod observation_form;
+mod preview;
 
 pub use framing_form::{FieldError, FramingForm};
 pub use live_check::{live_check, LiveCheck};
+pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS};
+pub use preview::{preview_observation, side_view_of};

@@ -9,3 +9,4 @@ mod side_view;
 
 pub use build::{build_report, PhotoFiles, ReportInput};
 pub use model::*;
+pub use side_view::side_view as side_view_for;

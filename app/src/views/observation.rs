@@ -1,0 +1,134 @@
+//! One observation: its fields laid out from core's field list, saved the moment they read,
+//! with the verdict and citation and the member's side view updating as it is typed.
+
+use crate::components::{SideViewSvg, StatusBadge};
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::forms::{
+    fields_of, preview_observation, side_view_of, FieldType, ObservationForm, KINDS,
+};
+
+#[component]
+pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
+    let app = use_app();
+    let (inspection, stored) = {
+        let store = app.store.borrow();
+        let inspection = store
+            .inspection_of(&owner)
+            .and_then(|i| store.load_inspection(&i))
+            .ok();
+        let stored = inspection.as_ref().and_then(|i| {
+            i.areas
+                .iter()
+                .flat_map(|a| {
+                    a.runs
+                        .iter()
+                        .flat_map(|r| {
+                            r.observations
+                                .iter()
+                                .chain(r.joists.iter().flat_map(|j| &j.observations))
+                        })
+                        .chain(a.members.iter().flat_map(|m| &m.observations))
+                })
+                .find(|o| *o.id == *id)
+                .cloned()
+        });
+        (inspection, stored)
+    };
+    let Some(inspection) = inspection else {
+        return rsx! { main { p { "This member is not in the store." } } };
+    };
+    let units = inspection.units;
+    let mut form = use_signal(|| match &stored {
+        Some(o) => ObservationForm::from_observation(o, units),
+        None => ObservationForm::new(&kind),
+    });
+    let mut errors = use_signal(Vec::new);
+    let exists = stored.is_some();
+    let (owner_id, obs_id) = (owner.clone(), id.clone());
+    let save = use_callback(move |(field, value): (&'static str, String)| {
+        form.with_mut(|f| {
+            if field == "note" {
+                f.note = value;
+            } else {
+                f.values.insert(field.to_string(), value);
+            }
+        });
+        match form().to_observation(obs_id.clone().into(), units) {
+            Ok(observation) => {
+                errors.set(vec![]);
+                let result = if exists || app.store.borrow().inspection_of(&obs_id).is_ok() {
+                    app.change(|s| s.update_observation(&observation))
+                } else {
+                    app.change(|s| s.add_observation(&owner_id, &observation))
+                };
+                if let Err(e) = result {
+                    errors.set(vec![undercroft_core::forms::FieldError {
+                        field: "save",
+                        message: e,
+                    }]);
+                }
+            }
+            Err(field_errors) => errors.set(field_errors),
+        }
+    });
+    let f = form();
+    let title = KINDS
+        .iter()
+        .find(|k| k.0 == f.kind)
+        .map_or("Observation", |k| k.1);
+    let verdict = f
+        .to_observation(id.clone().into(), units)
+        .ok()
+        .map(|o| preview_observation(&inspection, &owner, &o))
+        .unwrap_or_default();
+    let view = side_view_of(&inspection, &owner);
+    let specs = fields_of(&f.kind);
+    rsx! {
+        main {
+            nav { class: "back", Link { to: Route::InspectionView { id: inspection.id.clone() }, "< {inspection.property.address}" } }
+            h1 { "{title}" }
+            for finding in verdict.iter() {
+                div { class: "card", id: "verdict",
+                    StatusBadge { status: finding.status, use_text: finding.use_text() }
+                    p { "{finding.summary()}" }
+                    p { class: "muted", "Cites {finding.citation()}" }
+                }
+            }
+            if let Some(view) = view {
+                SideViewSvg { view }
+            }
+            for spec in specs.iter() {
+                label { r#for: "{spec.name}", "{spec.label}" }
+                match spec.kind {
+                    FieldType::Choice(options) => rsx! {
+                        select { id: "{spec.name}", onchange: move |e| save.call((spec.name, e.value())),
+                            option { value: "", "Pick" }
+                            for (value, text) in options.iter() {
+                                option { value: "{value}", selected: f.value(spec.name) == *value, "{text}" }
+                            }
+                        }
+                    },
+                    FieldType::Flag => rsx! {
+                        input { id: "{spec.name}", r#type: "checkbox", style: "width:auto;min-height:auto", checked: f.value(spec.name) == "true",
+                            onchange: move |e| save.call((spec.name, e.checked().to_string())) }
+                    },
+                    FieldType::Readings | FieldType::Text => rsx! {
+                        textarea { id: "{spec.name}", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
+                    },
+                    FieldType::Percent | FieldType::Count => rsx! {
+                        input { id: "{spec.name}", inputmode: "decimal", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
+                    },
+                    FieldType::Short | FieldType::Long => rsx! {
+                        input { id: "{spec.name}", inputmode: "text", autocomplete: "off", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
+                    },
+                }
+            }
+            label { r#for: "note", "Note" }
+            textarea { id: "note", value: "{f.note}", oninput: move |e| save.call(("note", e.value())) }
+            for e in errors() {
+                p { class: "field-error", "{e.field}: {e.message}" }
+            }
+        }
+    }
+}
