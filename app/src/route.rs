@@ -1,6 +1,6 @@
 //! The app's screens and their addresses.
 
-use crate::views::{AreaView, Findings, InspectionView, Inspections, ObservationView, RunView};
+use crate::views::{AreaView, Findings, InspectionView, Inspections, ObservationView, RunView, SettingsView};
 use dioxus::prelude::*;
 
 #[derive(Routable, Clone, PartialEq, Debug)]
@@ -25,6 +25,9 @@ pub enum Route {
         kind: String,
         id: String,
     },
+    /// The inspector, units, code edition, default loads.
+    #[route("/settings")]
+    SettingsView {},
     /// Every finding of an inspection, over limit first.
     #[route("/inspection/:id/findings")]
     Findings { id: String },

@@ -1,48 +1,113 @@
 //! Every finding of an inspection, over limit first, with its numbers, citation and
-//! recommendation.
+//! recommendation; the inspector can add a note, write their own recommendation, or set a
+//! finding aside as not applicable with a reason. Each is saved as it is typed.
 
 use crate::components::StatusBadge;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::evaluate;
+use undercroft_core::store::FindingNote;
+
+/// One finding as the screen shows it.
+#[derive(Clone, PartialEq)]
+struct Row {
+    key: String,
+    status: undercroft_core::Status,
+    use_text: Option<String>,
+    title: String,
+    summary: String,
+    measured: String,
+    citation: String,
+    recommendation: String,
+    location: String,
+    note: FindingNote,
+}
 
 #[component]
 pub fn Findings(id: String) -> Element {
     let app = use_app();
-    let loaded = app.store.borrow().load_inspection(&id);
+    let (loaded, notes) = {
+        let store = app.store.borrow();
+        (store.load_inspection(&id), store.finding_notes(&id).unwrap_or_default())
+    };
     let Ok(inspection) = loaded else {
         return rsx! { main { p { "This inspection is not in the store." } } };
     };
     let evaluation = evaluate(&inspection);
-    let rows: Vec<_> = evaluation
+    let rows: Vec<Row> = evaluation
         .by_attention()
         .into_iter()
         .map(|f| {
-            (
-                f.key(),
-                f.status,
-                f.use_text(),
-                f.title(),
-                f.summary(),
-                f.citation(),
-                f.recommendation(),
-                f.place.location.to_string(),
-            )
+            let key = f.key();
+            let note = notes.iter().find(|n| n.key == key).cloned().unwrap_or(FindingNote { key: key.clone(), ..Default::default() });
+            let measured = match (f.measured(), f.limit()) {
+                (Some(m), Some(l)) => format!("Measured {}, limit {}", m.text, l.text),
+                _ => f.not_checked_because.as_deref().map(|w| format!("Not checked: {w}")).unwrap_or_default(),
+            };
+            Row {
+                key,
+                status: f.status,
+                use_text: f.use_text(),
+                title: f.title().to_string(),
+                summary: f.summary(),
+                measured,
+                citation: f.citation(),
+                recommendation: note.recommendation.clone().unwrap_or_else(|| f.recommendation()),
+                location: f.place.location.to_string(),
+                note,
+            }
         })
         .collect();
     rsx! {
         main {
             nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
             h1 { "Findings" }
-            for (key, status, use_text, title, summary, citation, recommendation, location) in rows {
-                div { class: "card finding", key: "{key}",
-                    StatusBadge { status, use_text }
-                    h2 { "{title}" }
-                    p { class: "muted", "{location}" }
-                    p { "{summary}" }
-                    p { class: "muted", "Cites {citation}" }
-                    p { "{recommendation}" }
-                }
+            for row in rows {
+                FindingCard { key: "{row.key}", inspection_id: id.clone(), row }
+            }
+        }
+    }
+}
+
+#[component]
+fn FindingCard(inspection_id: String, row: Row) -> Element {
+    let app = use_app();
+    let mut open = use_signal(|| false);
+    let note = row.note.clone();
+    let save = use_callback(move |edit: (&'static str, String)| {
+        let mut n = note.clone();
+        let value = edit.1;
+        match edit.0 {
+            "note" => n.note = value,
+            "recommendation" => n.recommendation = (!value.trim().is_empty()).then_some(value),
+            _ => n.not_applicable_reason = (!value.trim().is_empty()).then_some(value),
+        }
+        let _ = app.change(|s| s.set_finding_note(&inspection_id, &n));
+    });
+    let set_aside = row.note.not_applicable_reason.clone();
+    rsx! {
+        div { class: "card finding",
+            StatusBadge { status: row.status, use_text: row.use_text.clone() }
+            if let Some(reason) = &set_aside {
+                p { class: "status", "Set aside: {reason}" }
+            }
+            h2 { "{row.title}" }
+            p { class: "muted", "{row.location}" }
+            p { "{row.summary}" }
+            p { "{row.measured}" }
+            p { class: "muted", "Cites {row.citation}" }
+            p { "{row.recommendation}" }
+            if !row.note.note.is_empty() {
+                p { "Note: {row.note.note}" }
+            }
+            button { class: "quiet", onclick: move |_| open.toggle(), if open() { "Close" } else { "Note, recommendation, set aside" } }
+            if open() {
+                label { "Your note" }
+                textarea { value: "{row.note.note}", oninput: move |e| save.call(("note", e.value())) }
+                label { "Your recommendation (leave empty for the computed one)" }
+                textarea { value: "{row.note.recommendation.clone().unwrap_or_default()}", oninput: move |e| save.call(("recommendation", e.value())) }
+                label { "Not applicable because (leave empty to keep the finding)" }
+                textarea { value: "{row.note.not_applicable_reason.clone().unwrap_or_default()}", oninput: move |e| save.call(("not_applicable", e.value())) }
             }
         }
     }

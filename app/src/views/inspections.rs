@@ -12,8 +12,9 @@ pub fn Inspections() -> Element {
     let mut address = use_signal(String::new);
     let mut client = use_signal(String::new);
     let mut date = use_signal(String::new);
-    let mut room = use_signal(|| "living".to_string());
-    let mut heavy = use_signal(|| false);
+    let settings = app.store.borrow().settings().unwrap_or_default();
+    let mut room = use_signal(|| if settings.room_use_above == RoomUse::Sleeping { "sleeping".to_string() } else { "living".to_string() });
+    let mut heavy = use_signal(|| settings.heavy_finish);
     let mut error = use_signal(|| None::<String>);
     let list = app
         .store
@@ -36,7 +37,11 @@ pub fn Inspections() -> Element {
                     RoomUse::Living
                 }),
                 heavy_finish: heavy(),
-                ..Default::default()
+                code_edition: settings.code_edition.clone(),
+                inspector_name: settings.inspector_name.clone(),
+                inspector_company: settings.company.clone(),
+                inspector_license: settings.license.clone(),
+                units: settings.units,
             };
             match app.change(|s| s.create_inspection(&new)) {
                 Ok(id) => {
@@ -49,6 +54,7 @@ pub fn Inspections() -> Element {
     rsx! {
         main {
             h1 { "Inspections" }
+            p { Link { to: Route::SettingsView {}, id: "settings-link", "Settings" } }
             input { r#type: "search", id: "search", placeholder: "Search address or client", value: "{search}", oninput: move |e| search.set(e.value()) }
             if list.is_empty() {
                 p { class: "muted", "No inspections yet." }

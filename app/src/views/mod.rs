@@ -6,6 +6,7 @@ mod inspection;
 mod inspections;
 mod observation;
 mod run;
+mod settings;
 
 pub use area::AreaView;
 pub use findings::Findings;
@@ -13,3 +14,4 @@ pub use inspection::InspectionView;
 pub use inspections::Inspections;
 pub use observation::ObservationView;
 pub use run::RunView;
+pub use settings::SettingsView;

@@ -19,6 +19,7 @@ pub struct NewInspection {
     pub inspector_name: String,
     pub inspector_company: String,
     pub inspector_license: String,
+    pub units: crate::units::UnitSystem,
 }
 
 /// One line of the inspection list.
@@ -60,8 +61,8 @@ impl Store {
         };
         self.conn.execute(
             "INSERT INTO inspections (id, format_version, address, client_name, visit_date, code_edition,
-                inspector_name, inspector_company, inspector_license, loads, created_at, updated_at, search_key)
-             VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?11, ?12)",
+                inspector_name, inspector_company, inspector_license, loads, created_at, updated_at, search_key, units)
+             VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?11, ?12, ?13)",
             params![
                 id,
                 FORMAT_VERSION,
@@ -75,6 +76,7 @@ impl Store {
                 serde_json::to_string(&loads)?,
                 now,
                 search_key(&new.address, &new.client_name),
+                super::save::text_of(&new.units)?,
             ],
         )?;
         Ok(id)

@@ -10,6 +10,7 @@ mod migrate;
 mod notes;
 mod photos;
 mod save;
+mod settings;
 mod tree;
 
 pub use bundle::{BundleError, ImportOutcome};
@@ -17,6 +18,7 @@ pub use clock::now_utc;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::SCHEMA_VERSION;
 pub use notes::{DeliveredReport, FindingNote};
+pub use settings::Settings;
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
 
 use rusqlite::Connection;

@@ -1,0 +1,70 @@
+//! The app's settings: who the inspector is, units, code edition and default loads, kept in
+//! the store so they survive like everything else.
+
+use super::{Result, Store};
+use crate::model::RoomUse;
+use crate::units::UnitSystem;
+use rusqlite::OptionalExtension;
+use serde::{Deserialize, Serialize};
+
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(default)]
+pub struct Settings {
+    pub inspector_name: String,
+    pub company: String,
+    pub license: String,
+    pub units: UnitSystem,
+    pub code_edition: String,
+    pub room_use_above: RoomUse,
+    pub heavy_finish: bool,
+}
+
+impl Default for Settings {
+    fn default() -> Self {
+        Settings {
+            inspector_name: String::new(),
+            company: String::new(),
+            license: String::new(),
+            units: UnitSystem::Imperial,
+            code_edition: "IRC 2018".into(),
+            room_use_above: RoomUse::Living,
+            heavy_finish: false,
+        }
+    }
+}
+
+const KEY: &str = "app";
+
+impl Store {
+    /// The saved settings, or the defaults.
+    pub fn settings(&self) -> Result<Settings> {
+        let text: Option<String> = self.conn.query_row("SELECT value FROM settings WHERE key = ?1", [KEY], |r| r.get(0)).optional()?;
+        Ok(text.and_then(|t| serde_json::from_str(&t).ok()).unwrap_or_default())
+    }
+
+    pub fn save_settings(&mut self, settings: &Settings) -> Result<()> {
+        self.conn.execute(
+            "INSERT INTO settings (key, value) VALUES (?1, ?2) ON CONFLICT (key) DO UPDATE SET value = ?2",
+            (KEY, serde_json::to_string(settings)?),
+        )?;
+        Ok(())
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn settings_survive_reopening() {
+        let dir = std::env::temp_dir().join(format!("undercroft-settings-{}", super::super::new_id()));
+        let db = dir.join("s.sqlite");
+        let mut store = Store::open(&db).unwrap();
+        assert_eq!(store.settings().unwrap(), Settings::default());
+        let mine = Settings { inspector_name: "Tomasz".into(), units: UnitSystem::Metric, heavy_finish: true, ..Default::default() };
+        store.save_settings(&mine).unwrap();
+        drop(store);
+        assert_eq!(Store::open(&db).unwrap().settings().unwrap(), mine);
+        std::fs::remove_dir_all(&dir).ok();
+    }
+}
