@@ -1,6 +1,9 @@
 //! The app's screens and their addresses.
 
-use crate::views::{AreaView, Findings, InspectionView, Inspections, ObservationView, RunView, SettingsView};
+use crate::views::{
+    AreaView, Findings, InspectionView, Inspections, ObservationView, ReportView, RunView,
+    SettingsView,
+};
 use dioxus::prelude::*;
 
 #[derive(Routable, Clone, PartialEq, Debug)]
@@ -25,6 +28,9 @@ pub enum Route {
         kind: String,
         id: String,
     },
+    /// Build the client report and see earlier deliveries.
+    #[route("/inspection/:id/report")]
+    ReportView { id: String },
     /// The inspector, units, code edition, default loads.
     #[route("/settings")]
     SettingsView {},

@@ -28,7 +28,10 @@ pub fn Findings(id: String) -> Element {
     let app = use_app();
     let (loaded, notes) = {
         let store = app.store.borrow();
-        (store.load_inspection(&id), store.finding_notes(&id).unwrap_or_default())
+        (
+            store.load_inspection(&id),
+            store.finding_notes(&id).unwrap_or_default(),
+        )
     };
     let Ok(inspection) = loaded else {
         return rsx! { main { p { "This inspection is not in the store." } } };
@@ -39,10 +42,21 @@ pub fn Findings(id: String) -> Element {
         .into_iter()
         .map(|f| {
             let key = f.key();
-            let note = notes.iter().find(|n| n.key == key).cloned().unwrap_or(FindingNote { key: key.clone(), ..Default::default() });
+            let note = notes
+                .iter()
+                .find(|n| n.key == key)
+                .cloned()
+                .unwrap_or(FindingNote {
+                    key: key.clone(),
+                    ..Default::default()
+                });
             let measured = match (f.measured(), f.limit()) {
                 (Some(m), Some(l)) => format!("Measured {}, limit {}", m.text, l.text),
-                _ => f.not_checked_because.as_deref().map(|w| format!("Not checked: {w}")).unwrap_or_default(),
+                _ => f
+                    .not_checked_because
+                    .as_deref()
+                    .map(|w| format!("Not checked: {w}"))
+                    .unwrap_or_default(),
             };
             Row {
                 key,
@@ -52,7 +66,10 @@ pub fn Findings(id: String) -> Element {
                 summary: f.summary(),
                 measured,
                 citation: f.citation(),
-                recommendation: note.recommendation.clone().unwrap_or_else(|| f.recommendation()),
+                recommendation: note
+                    .recommendation
+                    .clone()
+                    .unwrap_or_else(|| f.recommendation()),
                 location: f.place.location.to_string(),
                 note,
             }

@@ -57,12 +57,22 @@ pub fn InspectionView(id: String) -> Element {
         }
     };
     let total_over = evaluation.count(Status::OverLimit);
+    let archive = {
+        let app = app.clone();
+        let id = id.clone();
+        move |_| {
+            if app.change(|s| s.archive_inspection(&id, true)).is_ok() {
+                navigator().push(Route::Inspections {});
+            }
+        }
+    };
     rsx! {
         main {
             nav { class: "back", Link { to: Route::Inspections {}, "< Inspections" } }
             h1 { "{inspection.property.address}" }
             p { class: "muted", "{inspection.client.name} {inspection.date} {inspection.code_edition}" }
             p { Link { to: Route::Findings { id: id.clone() }, id: "findings-link", "Findings: {total_over} over a limit" } }
+            p { Link { to: Route::ReportView { id: id.clone() }, id: "report-link", "Report" } }
             h2 { "Areas" }
             ul { class: "list",
                 for (area_id, area_name, over) in areas {
@@ -89,6 +99,8 @@ pub fn InspectionView(id: String) -> Element {
                 p { class: "field-error", "{e}" }
             }
             button { id: "add-area", onclick: add, "Add area" }
+            h2 { "This inspection" }
+            button { class: "quiet", id: "archive", onclick: archive, "Archive it (hidden from the list, kept)" }
         }
     }
 }

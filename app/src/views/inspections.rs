@@ -13,7 +13,13 @@ pub fn Inspections() -> Element {
     let mut client = use_signal(String::new);
     let mut date = use_signal(String::new);
     let settings = app.store.borrow().settings().unwrap_or_default();
-    let mut room = use_signal(|| if settings.room_use_above == RoomUse::Sleeping { "sleeping".to_string() } else { "living".to_string() });
+    let mut room = use_signal(|| {
+        if settings.room_use_above == RoomUse::Sleeping {
+            "sleeping".to_string()
+        } else {
+            "living".to_string()
+        }
+    });
     let mut heavy = use_signal(|| settings.heavy_finish);
     let mut error = use_signal(|| None::<String>);
     let list = app

@@ -5,6 +5,7 @@ mod findings;
 mod inspection;
 mod inspections;
 mod observation;
+mod report;
 mod run;
 mod settings;
 
@@ -13,5 +14,6 @@ pub use findings::Findings;
 pub use inspection::InspectionView;
 pub use inspections::Inspections;
 pub use observation::ObservationView;
+pub use report::ReportView;
 pub use run::RunView;
 pub use settings::SettingsView;

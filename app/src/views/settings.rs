@@ -17,8 +17,20 @@ pub fn SettingsView() -> Element {
             "company" => s.company = edit.1,
             "license" => s.license = edit.1,
             "edition" => s.code_edition = edit.1,
-            "units" => s.units = if edit.1 == "metric" { UnitSystem::Metric } else { UnitSystem::Imperial },
-            "room" => s.room_use_above = if edit.1 == "sleeping" { RoomUse::Sleeping } else { RoomUse::Living },
+            "units" => {
+                s.units = if edit.1 == "metric" {
+                    UnitSystem::Metric
+                } else {
+                    UnitSystem::Imperial
+                }
+            }
+            "room" => {
+                s.room_use_above = if edit.1 == "sleeping" {
+                    RoomUse::Sleeping
+                } else {
+                    RoomUse::Living
+                }
+            }
             _ => s.heavy_finish = edit.1 == "true",
         });
         let current = settings();

@@ -18,8 +18,8 @@ pub use clock::now_utc;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::SCHEMA_VERSION;
 pub use notes::{DeliveredReport, FindingNote};
-pub use settings::Settings;
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
+pub use settings::Settings;
 
 use rusqlite::Connection;
 use std::path::{Path, PathBuf};
@@ -112,6 +112,17 @@ impl Store {
 
     pub fn photo_dir(&self) -> &Path {
         self.photos.root()
+    }
+
+    /// Where built reports are written: a folder beside the photos.
+    pub fn report_dir(&self) -> PathBuf {
+        let root = self.photos.root();
+        let name = root
+            .file_name()
+            .and_then(|n| n.to_str())
+            .unwrap_or("undercroft-photos")
+            .replace("-photos", "-reports");
+        root.with_file_name(name)
     }
 }
 

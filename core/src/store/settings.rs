@@ -38,8 +38,15 @@ const KEY: &str = "app";
 impl Store {
     /// The saved settings, or the defaults.
     pub fn settings(&self) -> Result<Settings> {
-        let text: Option<String> = self.conn.query_row("SELECT value FROM settings WHERE key = ?1", [KEY], |r| r.get(0)).optional()?;
-        Ok(text.and_then(|t| serde_json::from_str(&t).ok()).unwrap_or_default())
+        let text: Option<String> = self
+            .conn
+            .query_row("SELECT value FROM settings WHERE key = ?1", [KEY], |r| {
+                r.get(0)
+            })
+            .optional()?;
+        Ok(text
+            .and_then(|t| serde_json::from_str(&t).ok())
+            .unwrap_or_default())
     }
 
     pub fn save_settings(&mut self, settings: &Settings) -> Result<()> {
@@ -57,11 +64,17 @@ mod tests {
 
     #[test]
     fn settings_survive_reopening() {
-        let dir = std::env::temp_dir().join(format!("undercroft-settings-{}", super::super::new_id()));
+        let dir =
+            std::env::temp_dir().join(format!("undercroft-settings-{}", super::super::new_id()));
         let db = dir.join("s.sqlite");
         let mut store = Store::open(&db).unwrap();
         assert_eq!(store.settings().unwrap(), Settings::default());
-        let mine = Settings { inspector_name: "Tomasz".into(), units: UnitSystem::Metric, heavy_finish: true, ..Default::default() };
+        let mine = Settings {
+            inspector_name: "Tomasz".into(),
+            units: UnitSystem::Metric,
+            heavy_finish: true,
+            ..Default::default()
+        };
         store.save_settings(&mine).unwrap();
         drop(store);
         assert_eq!(Store::open(&db).unwrap().settings().unwrap(), mine);

@@ -1,0 +1,187 @@
+//! The report: build it with visible progress, then open it; earlier deliveries listed.
+
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::evaluate;
+use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+
+/// Lets the screen draw the progress line before the next step runs.
+async fn yield_now() {
+    let mut yielded = false;
+    std::future::poll_fn(move |cx| {
+        if yielded {
+            std::task::Poll::Ready(())
+        } else {
+            yielded = true;
+            cx.waker().wake_by_ref();
+            std::task::Poll::Pending
+        }
+    })
+    .await
+}
+
+/// A file name from the address and date, letters and digits only.
+fn file_name(address: &str, date: &str) -> String {
+    let clean: String = address
+        .chars()
+        .map(|c| if c.is_alphanumeric() { c } else { '-' })
+        .collect();
+    let clean = clean
+        .split('-')
+        .filter(|p| !p.is_empty())
+        .collect::<Vec<_>>()
+        .join("-");
+    format!(
+        "{}-{date}.pdf",
+        if clean.is_empty() {
+            "report".into()
+        } else {
+            clean
+        }
+    )
+}
+
+#[component]
+pub fn ReportView(id: String) -> Element {
+    let app = use_app();
+    let mut progress = use_signal(|| None::<String>);
+    let mut built = use_signal(|| None::<std::path::PathBuf>);
+    let mut paper = use_signal(|| "letter".to_string());
+    let (inspection, deliveries) = {
+        let store = app.store.borrow();
+        (
+            store.load_inspection(&id).ok(),
+            store.reports(&id).unwrap_or_default(),
+        )
+    };
+    let Some(inspection) = inspection else {
+        return rsx! { main { p { "This inspection is not in the store." } } };
+    };
+    let build = {
+        let app = app.clone();
+        let inspection = inspection.clone();
+        move |_| {
+            let app = app.clone();
+            let inspection = inspection.clone();
+            spawn(async move {
+                progress.set(Some("Checking every member against its limits...".into()));
+                yield_now().await;
+                let (files, notes, dir) = {
+                    let store = app.store.borrow();
+                    let files: PhotoFiles = store
+                        .photos_of_inspection(&inspection.id)
+                        .unwrap_or_default()
+                        .into_iter()
+                        .filter_map(|p| p.report_path.map(|f| (p.id, f)))
+                        .collect();
+                    (
+                        files,
+                        store.finding_notes(&inspection.id).unwrap_or_default(),
+                        store.report_dir(),
+                    )
+                };
+                let evaluation = evaluate(&inspection);
+                progress.set(Some(format!(
+                    "Laying out {} findings and {} photos...",
+                    evaluation.findings.len(),
+                    files.len()
+                )));
+                yield_now().await;
+                let paper = Paper::parse(&paper()).unwrap_or_default();
+                let report = build_report(&ReportInput {
+                    inspection: &inspection,
+                    evaluation: &evaluation,
+                    notes: &notes,
+                    photo_files: &files,
+                    paper,
+                });
+                let bytes = pdf::render(&report);
+                progress.set(Some("Saving the PDF...".into()));
+                yield_now().await;
+                let name = file_name(&inspection.property.address, &inspection.date);
+                let path = dir.join(&name);
+                let written =
+                    std::fs::create_dir_all(&dir).and_then(|_| std::fs::write(&path, &bytes));
+                match written {
+                    Ok(()) => {
+                        let findings =
+                            serde_json::to_string(&evaluation.findings).unwrap_or_default();
+                        match app
+                            .change(|s| s.record_report(&inspection.id, &name, &bytes, &findings))
+                        {
+                            Ok(_) => {
+                                progress.set(Some(format!(
+                                    "Report ready: {} pages of findings, {:.1} MB",
+                                    report.areas.len(),
+                                    bytes.len() as f64 / 1e6
+                                )));
+                                built.set(Some(path));
+                            }
+                            Err(e) => progress.set(Some(format!(
+                                "The report was written but not recorded: {e}"
+                            ))),
+                        }
+                    }
+                    Err(e) => progress.set(Some(format!("The report could not be saved: {e}"))),
+                }
+            });
+        }
+    };
+    rsx! {
+        main {
+            nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
+            h1 { "Report" }
+            label { r#for: "paper", "Paper" }
+            select { id: "paper", onchange: move |e| paper.set(e.value()),
+                option { value: "letter", selected: paper() == "letter", "Letter" }
+                option { value: "a4", selected: paper() == "a4", "A4" }
+            }
+            p { button { id: "build-report", onclick: build, "Build the report" } }
+            if let Some(line) = progress() {
+                p { id: "report-progress", role: "status", "{line}" }
+            }
+            if let Some(path) = built() {
+                p { id: "report-path", class: "muted", "{path.display()}" }
+                button { class: "quiet", onclick: move |_| { let _ = open_file(&path); }, "Open the PDF" }
+            }
+            h2 { "Delivered" }
+            if deliveries.is_empty() {
+                p { class: "muted", "No report delivered yet." }
+            }
+            ul { class: "list",
+                for d in deliveries {
+                    li { key: "{d.id}", span { "{d.file_name}" } br {} span { class: "muted", "{d.delivered_at}, {d.bytes} bytes, SHA-256 {d.sha256}" } }
+                }
+            }
+        }
+    }
+}
+
+/// Opens a file with the platform's viewer (share sheets on phones are for the mobile
+/// build to add).
+fn open_file(path: &std::path::Path) -> std::io::Result<()> {
+    let program = if cfg!(target_os = "macos") {
+        "open"
+    } else {
+        "xdg-open"
+    };
+    std::process::Command::new(program)
+        .arg(path)
+        .spawn()
+        .map(|_| ())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::file_name;
+
+    #[test]
+    fn report_file_names() {
+        assert_eq!(
+            file_name("2719 Quillback Road, Marrow Falls", "2026-11-30"),
+            "2719-Quillback-Road-Marrow-Falls-2026-11-30.pdf"
+        );
+        assert_eq!(file_name("../../etc", "2026-11-30"), "etc-2026-11-30.pdf");
+        assert_eq!(file_name("李 Street", "d"), "李-Street-d.pdf");
+    }
+}
