@@ -117,6 +117,11 @@ fn observation_shows_verdict_citation_and_side_view() {
     assert!(html.contains("IRC 2018 R502.8.1"));
     assert!(html.contains("<svg"), "the side view is drawn");
     assert!(html.contains("middle third"));
+    assert!(
+        html.contains("Take or pick photos"),
+        "photos can be added to a saved observation"
+    );
+    assert!(html.contains("accept=\"image/*\""));
     let fresh = render("/observe/run-dining/notch/new-one");
     assert!(fresh.contains("Distance from the support face"), "{fresh}");
 }
@@ -127,4 +132,18 @@ fn run_lists_its_observations_and_the_kinds_to_add() {
     assert!(html.contains("moisture reading"), "{html}");
     assert!(html.contains("Pick what you saw"));
     assert!(html.contains("Bored hole"));
+}
+
+#[test]
+fn settings_and_report_screens() {
+    let html = render("/settings");
+    assert!(
+        html.contains("License number") && html.contains("Code edition"),
+        "{html}"
+    );
+    let html = render(&format!("/inspection/{DEMO}/report"));
+    assert!(
+        html.contains("Build the report") && html.contains("No report delivered yet."),
+        "{html}"
+    );
 }

@@ -1,5 +1,6 @@
 //! One area: its joist runs and single members; add a run, copying the previous one's values.
 
+use crate::components::Photos;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::model::JoistRun;
@@ -81,6 +82,7 @@ pub fn AreaView(id: String) -> Element {
                 p { class: "field-error", "{e}" }
             }
             button { id: "add-run", onclick: add, "Add run" }
+            Photos { owner: id.clone() }
         }
     }
 }

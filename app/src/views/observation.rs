@@ -1,7 +1,7 @@
 //! One observation: its fields laid out from core's field list, saved the moment they read,
 //! with the verdict and citation and the member's side view updating as it is typed.
 
-use crate::components::{SideViewSvg, StatusBadge};
+use crate::components::{Photos, SideViewSvg, StatusBadge};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -128,6 +128,11 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
             textarea { id: "note", value: "{f.note}", oninput: move |e| save.call(("note", e.value())) }
             for e in errors() {
                 p { class: "field-error", "{e.field}: {e.message}" }
+            }
+            if exists {
+                Photos { owner: id.clone() }
+            } else {
+                p { class: "muted", "Photos can be added once the observation is saved (its required fields filled)." }
             }
         }
     }

@@ -1,6 +1,6 @@
 //! One joist run: its framing as typed, saved on every change, with the live check card.
 
-use crate::components::LiveCard;
+use crate::components::{LiveCard, Photos};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FramingForm, ObservationForm, KINDS};
@@ -138,6 +138,7 @@ pub fn RunView(id: String) -> Element {
                 option { value: "", "Pick what you saw" }
                 for (value, text) in KINDS.iter() { option { value: "{value}", "{text}" } }
             }
+            Photos { owner: id.clone() }
         }
     }
 }
