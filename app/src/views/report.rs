@@ -111,7 +111,8 @@ pub fn ReportView(id: String) -> Element {
                         {
                             Ok(_) => {
                                 progress.set(Some(format!(
-                                    "Report ready: {} pages of findings, {:.1} MB",
+                                    "Report ready: {} findings in {} areas, {:.1} MB",
+                                    evaluation.findings.len(),
                                     report.areas.len(),
                                     bytes.len() as f64 / 1e6
                                 )));
@@ -150,11 +151,16 @@ pub fn ReportView(id: String) -> Element {
             }
             ul { class: "list",
                 for d in deliveries {
-                    li { key: "{d.id}", span { "{d.file_name}" } br {} span { class: "muted", "{d.delivered_at}, {d.bytes} bytes, SHA-256 {d.sha256}" } }
+                    li { key: "{d.id}", span { "{d.file_name}" } br {} span { class: "muted", "{d.delivered_at}, {d.bytes} bytes, SHA-256 {short_hash(&d.sha256)}" } }
                 }
             }
         }
     }
+}
+
+/// The first 12 hex digits of a hash, enough to tell deliveries apart on screen.
+fn short_hash(hash: &str) -> String {
+    format!("{}...", hash.chars().take(12).collect::<String>())
 }
 
 /// Opens a file with the platform's viewer (share sheets on phones are for the mobile
