@@ -111,6 +111,10 @@ fn acknowledged_edits_survive_sigkill() {
                 joist.label
             );
         }
+        // What was found is durable now: the next run is held to it.
+        if last_label.is_some() {
+            last_label = Some(joist.label.clone());
+        }
         acknowledged_total += acks.len();
     }
     assert!(
