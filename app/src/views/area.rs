@@ -20,7 +20,7 @@ pub fn AreaView(id: String) -> Element {
     };
     let Some((inspection, area)) = found
         .ok()
-        .and_then(|i| i.areas.iter().find(|a| a.id == id).cloned().map(|a| (i, a)))
+        .and_then(|i| i.area(&id).cloned().map(|a| (i, a)))
     else {
         return rsx! { main { p { "This area is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
     };

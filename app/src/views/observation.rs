@@ -18,20 +18,9 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
             .and_then(|i| store.load_inspection(&i))
             .ok();
         let stored = inspection.as_ref().and_then(|i| {
-            i.areas
-                .iter()
-                .flat_map(|a| {
-                    a.runs
-                        .iter()
-                        .flat_map(|r| {
-                            r.observations
-                                .iter()
-                                .chain(r.joists.iter().flat_map(|j| &j.observations))
-                        })
-                        .chain(a.members.iter().flat_map(|m| &m.observations))
-                })
-                .find(|o| *o.id == *id)
-                .cloned()
+            i.observations()
+                .find(|(_, o)| *o.id == *id)
+                .map(|(_, o)| o.clone())
         });
         (inspection, stored)
     };

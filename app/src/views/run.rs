@@ -3,7 +3,7 @@
 use crate::components::{LiveCard, Photos};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FramingForm, ObservationForm, KINDS};
+use undercroft_core::forms::{live_check, FramingForm, ObservationForm, KINDS, SUPPORTS};
 use undercroft_core::store::new_id;
 
 /// The pick lists: the trade's choices, so nothing needs typing that a tap can pick.
@@ -21,15 +21,6 @@ const GRADES: [(&str, &str); 5] = [
     ("none", "No stamp visible"),
 ];
 const SIZES: [&str; 6] = ["2x4", "2x6", "2x8", "2x10", "2x12", "2x14"];
-const SUPPORTS: [(&str, &str); 7] = [
-    ("wood", "Wood"),
-    ("metal", "Metal"),
-    ("masonry", "Masonry"),
-    ("concrete", "Concrete"),
-    ("hanger", "Joist hanger"),
-    ("ribbon", "Ribbon strip"),
-    ("ledger", "Ledger strip"),
-];
 
 #[component]
 pub fn RunView(id: String) -> Element {
@@ -114,7 +105,7 @@ pub fn RunView(id: String) -> Element {
             label { r#for: "bearing-on", "Ends bear on" }
             select { id: "bearing-on", value: "{f.bearing_on}", onchange: move |e| save.call(("bearing_on", e.value())),
                 option { value: "", "Pick" }
-                for (key, name) in SUPPORTS { option { value: key, selected: f.bearing_on == key, "{name}" } }
+                for (key, name) in SUPPORTS.iter().copied() { option { value: key, selected: f.bearing_on == key, "{name}" } }
             }
             label { r#for: "bearing-length", "Bearing length, inches" }
             input { id: "bearing-length", inputmode: "decimal", value: "{f.bearing_length}", oninput: move |e| save.call(("bearing_length", e.value())) }

@@ -9,5 +9,5 @@ mod preview;
 
 pub use framing_form::{FieldError, FramingForm};
 pub use live_check::{live_check, LiveCheck};
-pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS};
+pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};
 pub use preview::{preview_observation, side_view_of};

@@ -40,7 +40,8 @@ pub struct FieldSpec {
 
 const EDGES: &[(&str, &str)] = &[("bottom", "Bottom edge"), ("top", "Top edge")];
 const ENDS: &[(&str, &str)] = &[("a", "From support A"), ("b", "From support B")];
-const SUPPORTS: &[(&str, &str)] = &[
+/// What a joist end can bear on, as (value, label).
+pub const SUPPORTS: &[(&str, &str)] = &[
     ("wood", "Wood"),
     ("metal", "Metal"),
     ("masonry", "Masonry"),
@@ -443,16 +444,7 @@ mod tests {
         let demo =
             crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
                 .unwrap();
-        let observations = demo.areas.iter().flat_map(|a| {
-            a.runs
-                .iter()
-                .flat_map(|r| {
-                    r.observations
-                        .iter()
-                        .chain(r.joists.iter().flat_map(|j| &j.observations))
-                })
-                .chain(a.members.iter().flat_map(|m| &m.observations))
-        });
+        let observations = demo.observations().map(|(_, o)| o);
         let mut kinds = std::collections::HashSet::new();
         for o in observations {
             let f = ObservationForm::from_observation(o, UnitSystem::Imperial);

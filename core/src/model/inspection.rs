@@ -41,6 +41,38 @@ pub struct Inspection {
     pub photos: Vec<PhotoRef>,
 }
 
+impl Inspection {
+    /// Every observation with the id of the run or member it is on, in entry order.
+    pub fn observations(&self) -> impl Iterator<Item = (&str, &Observation)> {
+        self.areas.iter().flat_map(|a| {
+            let runs = a.runs.iter().flat_map(|r| {
+                let typical = r.observations.iter().map(move |o| (r.id.as_str(), o));
+                let joists = r
+                    .joists
+                    .iter()
+                    .flat_map(|j| j.observations.iter().map(move |o| (j.id.as_str(), o)));
+                typical.chain(joists)
+            });
+            let members = a
+                .members
+                .iter()
+                .flat_map(|m| m.observations.iter().map(move |o| (m.id.as_str(), o)));
+            runs.chain(members)
+        })
+    }
+
+    pub fn area(&self, id: &str) -> Option<&Area> {
+        self.areas.iter().find(|a| a.id == id)
+    }
+
+    /// A joist run and the area it is in.
+    pub fn run(&self, id: &str) -> Option<(&Area, &JoistRun)> {
+        self.areas
+            .iter()
+            .find_map(|a| a.runs.iter().find(|r| r.id == id).map(|r| (a, r)))
+    }
+}
+
 fn default_edition() -> String {
     "IRC 2018".into()
 }
