@@ -128,6 +128,12 @@ fn observation_shows_verdict_citation_and_side_view() {
 
 #[test]
 fn run_lists_its_observations_and_the_kinds_to_add() {
+    let kitchen = render("/run/run-kitchen");
+    assert!(
+        kitchen.contains("Joist 7 from the north wall")
+            && kitchen.contains("Add a joist of this run"),
+        "{kitchen}"
+    );
     let html = render("/run/run-dining");
     assert!(html.contains("moisture reading"), "{html}");
     assert!(html.contains("Pick what you saw"));

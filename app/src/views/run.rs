@@ -4,6 +4,7 @@ use crate::components::{LiveCard, Photos};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FramingForm, ObservationForm, KINDS, SUPPORTS};
+use undercroft_core::model::Joist;
 use undercroft_core::store::new_id;
 
 /// The pick lists: the trade's choices, so nothing needs typing that a tap can pick.
@@ -54,11 +55,12 @@ pub fn RunView(id: String) -> Element {
     let label = run.label.clone();
     // Every change is saved the moment it is made; a field that does not read yet keeps its
     // stored value.
+    let save_app = app.clone();
     let save = use_callback(move |(field, value): (&'static str, String)| {
         form.with_mut(|f| f.set(field, value));
         let (framing, field_errors) = form().merged_with(&stored, units);
         errors.set(field_errors);
-        if let Err(e) = app.change(|s| s.update_run(&run_id, &label, &framing)) {
+        if let Err(e) = save_app.change(|s| s.update_run(&run_id, &label, &framing)) {
             errors.set(vec![undercroft_core::forms::FieldError {
                 field: "save",
                 message: e,
@@ -78,6 +80,20 @@ pub fn RunView(id: String) -> Element {
         })
         .collect();
     let owner = id.clone();
+    let add_joist = {
+        let app = app.clone();
+        let run_id = id.clone();
+        let next = run.joists.len() + 1;
+        move |_| {
+            let joist = Joist {
+                id: new_id(),
+                label: format!("Joist {next}"),
+                framing: Default::default(),
+                observations: vec![],
+            };
+            let _ = app.change(|s| s.add_joist(&run_id, &joist));
+        }
+    };
     rsx! {
         main {
             nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
@@ -112,6 +128,19 @@ pub fn RunView(id: String) -> Element {
             for e in errors() {
                 p { class: "field-error", "{e.field}: {e.message}" }
             }
+            h2 { "Joists with their own observations" }
+            for joist in run.joists.iter() {
+                div { class: "card", key: "{joist.id}",
+                    h2 { "{joist.label}" }
+                    ul { class: "list",
+                        for o in joist.observations.iter() {
+                            li { key: "{o.id}", Link { to: Route::ObservationView { owner: joist.id.clone(), kind: ObservationForm::from_observation(o, units).kind, id: o.id.to_string() }, "{o.kind.name()}" } }
+                        }
+                    }
+                    Link { to: Route::ObservationView { owner: joist.id.clone(), kind: "notch".into(), id: new_id() }, "Add a notch on this joist" }
+                }
+            }
+            button { class: "quiet", id: "add-joist", onclick: add_joist, "Add a joist of this run" }
             h2 { "Observations on these joists" }
             ul { class: "list",
                 for (oid, okind, oname) in observations {
