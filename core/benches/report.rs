@@ -7,7 +7,7 @@
 //! `UNDERCROFT_BENCH_PHOTOS=/tmp/photos40 cargo bench -p undercroft-core --bench report`.
 
 use std::path::{Path, PathBuf};
-use std::time::{Duration, Instant};
+use std::time::Instant;
 use undercroft_core::interchange::from_json;
 use undercroft_core::model::*;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
@@ -189,6 +189,5 @@ fn main() {
     store.import_inspection(&inspection(n)).unwrap();
     import(&mut store, &photos, 1);
     println!("(the same import on 1 thread: {:.2?})", single.elapsed());
-    let _: Duration = single.elapsed();
     std::fs::remove_dir_all(&tmp).ok();
 }

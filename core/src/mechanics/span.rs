@@ -194,41 +194,31 @@ mod tests {
     use super::*;
     use crate::lumber::NominalSize;
 
-    fn floor(
-        species: Species,
-        grade: Grade,
-        size: (u8, u8),
-        spacing: f64,
-        live: f64,
-        dead: f64,
-    ) -> SpanResult {
-        allowable_span(&SpanInput {
-            species,
-            grade,
-            section: NominalSize::new(size.0, size.1).dressed_section(),
-            spacing: Length::inches(spacing),
-            live: Psf(live),
-            dead: Psf(dead),
+    /// The tests' case: SPF No. 2 2x10 at 16 in, 40 psf live, 10 psf dead, L/360.
+    fn spf_no2_2x10(wet_service: bool) -> SpanInput {
+        SpanInput {
+            species: Species::SprucePineFir,
+            grade: Grade::No2,
+            section: NominalSize::new(2, 10).dressed_section(),
+            spacing: Length::inches(16.0),
+            live: Psf(40.0),
+            dead: Psf(10.0),
             deflection_denominator: 360.0,
-            wet_service: false,
+            wet_service,
             duration: LoadDuration::TenYears,
             repetitive: true,
-        })
-        .unwrap()
+        }
+    }
+
+    fn dry() -> SpanResult {
+        allowable_span(&spf_no2_2x10(false)).unwrap()
     }
 
     // Source: IRC 2015 Table R502.3.1(2), SPF No. 2 2x10 at 16 in, 40 psf live, 10 psf dead:
     // 15-5 (185 in).
     #[test]
     fn spf_no2_2x10_16_oc() {
-        let r = floor(
-            Species::SprucePineFir,
-            Grade::No2,
-            (2, 10),
-            16.0,
-            40.0,
-            10.0,
-        );
+        let r = dry();
         assert_eq!(r.allowable_span_rounded_in, 185.0);
         assert_eq!(r.governing, Governing::Bending);
     }
@@ -238,14 +228,7 @@ mod tests {
     // L = (4/3) 135 x 13.875 / 5.556 = 449.6 in.
     #[test]
     fn shear_span_by_hand() {
-        let r = floor(
-            Species::SprucePineFir,
-            Grade::No2,
-            (2, 10),
-            16.0,
-            40.0,
-            10.0,
-        );
+        let r = dry();
         assert!(
             (r.shear_span_in - 449.55).abs() < 0.1,
             "{}",
@@ -257,14 +240,7 @@ mod tests {
     // 1.5 in = 637.5 lb/in of bearing; required 0.837 in. Hand computation.
     #[test]
     fn required_bearing_by_hand() {
-        let r = floor(
-            Species::SprucePineFir,
-            Grade::No2,
-            (2, 10),
-            16.0,
-            40.0,
-            10.0,
-        );
+        let r = dry();
         let need = r.required_bearing(Length::inches(192.0)).in_inches();
         assert!((need - 533.33 / 637.5).abs() < 0.001, "{need}");
     }
@@ -274,26 +250,8 @@ mod tests {
     // so the deflection span drops by 0.9^(1/3).
     #[test]
     fn wet_service_reduces_stiffness() {
-        let dry = floor(
-            Species::SprucePineFir,
-            Grade::No2,
-            (2, 10),
-            16.0,
-            40.0,
-            10.0,
-        );
-        let mut input = SpanInput {
-            species: Species::SprucePineFir,
-            grade: Grade::No2,
-            section: NominalSize::new(2, 10).dressed_section(),
-            spacing: Length::inches(16.0),
-            live: Psf(40.0),
-            dead: Psf(10.0),
-            deflection_denominator: 360.0,
-            wet_service: true,
-            duration: LoadDuration::TenYears,
-            repetitive: true,
-        };
+        let dry = dry();
+        let mut input = spf_no2_2x10(true);
         let wet = allowable_span(&input).unwrap();
         assert_eq!(wet.bending_span_in, dry.bending_span_in);
         assert!((wet.deflection_span_in / dry.deflection_span_in - 0.9f64.cbrt()).abs() < 1e-12);

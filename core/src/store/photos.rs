@@ -63,7 +63,7 @@ impl Store {
         bytes: &[u8],
         caption: &str,
     ) -> Result<PhotoRef> {
-        self.check_owner(attached_to)?;
+        let inspection_id = self.check_owner(attached_to)?;
         let hash = content_hash(bytes);
         let prepared = match self.existing_size(&hash)? {
             Some(_) => PreparedPhoto {
@@ -73,7 +73,7 @@ impl Store {
             },
             None => prepare_photo(bytes)?,
         };
-        self.add_prepared_photo(attached_to, bytes, &prepared, caption)
+        self.store_prepared(&inspection_id, attached_to, bytes, &prepared, caption)
     }
 
     /// Stores a photo prepared by `prepare_photo` (which may run on other threads).
@@ -85,6 +85,19 @@ impl Store {
         caption: &str,
     ) -> Result<PhotoRef> {
         let inspection_id = self.check_owner(attached_to)?;
+        self.store_prepared(&inspection_id, attached_to, bytes, prepared, caption)
+    }
+
+    /// Writes the prepared photo's files durably, then its row (the owner already checked).
+    fn store_prepared(
+        &mut self,
+        inspection_id: &str,
+        attached_to: &str,
+        bytes: &[u8],
+        prepared: &PreparedPhoto,
+        caption: &str,
+    ) -> Result<PhotoRef> {
+        let inspection_id = inspection_id.to_string();
         let hash = &prepared.hash;
         let (width, height) = match &prepared.processed {
             Some(processed) => {

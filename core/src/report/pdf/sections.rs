@@ -148,7 +148,6 @@ const COLUMNS: [(&str, f32); 8] = [
 
 fn member_table(w: &mut Writer, rows: &[MemberRow]) {
     let size = 7.5;
-    let cw = w.content_width();
     let header: Vec<String> = COLUMNS.iter().map(|c| c.0.to_string()).collect();
     table_row(w, &header, size, Face::Bold, Some((0.9, 0.9, 0.88)));
     for (n, r) in rows.iter().enumerate() {
@@ -170,7 +169,6 @@ fn member_table(w: &mut Writer, rows: &[MemberRow]) {
             (n % 2 == 1).then_some((0.97, 0.97, 0.96)),
         );
     }
-    let _ = cw;
     w.space(6.0);
 }
 
