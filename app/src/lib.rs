@@ -4,11 +4,13 @@
 
 pub mod components;
 pub mod route;
+pub mod startup;
 pub mod state;
 pub mod style;
 pub mod views;
 
 pub use route::Route;
+pub use startup::{prepare_store, Root, RootProps};
 pub use state::{use_app, AppState};
 
 use dioxus::prelude::*;

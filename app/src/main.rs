@@ -3,58 +3,33 @@
 //! starts the app. The webview's own data goes to the same folder.
 
 use dioxus::desktop::{Config, LogicalSize, WindowBuilder};
-use dioxus::prelude::*;
-use undercroft_app::{App, AppState};
-use undercroft_core::store::{ListFilter, Store};
-
-const DEMO: &str = include_str!("../../demo-data/demo-inspection.json");
-
-/// The store's path, set once before launch (the launcher takes a plain function).
-static DB: std::sync::OnceLock<std::path::PathBuf> = std::sync::OnceLock::new();
-
-fn root() -> Element {
-    let state = use_hook(|| {
-        AppState::new(Store::open(DB.get().expect("set before launch")).expect("store opens"))
-    });
-    use_context_provider(|| state);
-    rsx! { App {} }
-}
+use undercroft_app::startup::{prepare_store, root_from_context, StorePath};
+use undercroft_core::store::Store;
 
 fn main() {
-    let db = std::env::var_os("UNDERCROFT_DB")
+    let Some(db) = std::env::var_os("UNDERCROFT_DB")
         .map(std::path::PathBuf::from)
         .or_else(Store::default_path)
-        .expect("a data folder for the store (set UNDERCROFT_DB)");
+    else {
+        eprintln!("undercroft-app: no data folder found for the store; set UNDERCROFT_DB");
+        std::process::exit(2);
+    };
+    if let Err(e) = prepare_store(&db, true) {
+        eprintln!("undercroft-app: {e}");
+        std::process::exit(1);
+    }
     let data_dir = db
         .parent()
         .map(std::path::Path::to_path_buf)
         .unwrap_or_default();
-    {
-        let mut store = Store::open(&db)
-            .unwrap_or_else(|e| panic!("cannot open the store at {}: {e}", db.display()));
-        let empty = store
-            .list_inspections(&ListFilter {
-                include_archived: true,
-                ..Default::default()
-            })
-            .map(|l| l.is_empty())
-            .unwrap_or(false);
-        if empty {
-            let demo =
-                undercroft_core::interchange::from_json(DEMO).expect("the demo inspection reads");
-            store
-                .import_inspection(&demo)
-                .expect("the demo inspection is stored");
-        }
-    }
     let window = WindowBuilder::new()
         .with_title("Undercroft")
         .with_inner_size(LogicalSize::new(390.0, 844.0));
     let config = Config::new()
         .with_window(window)
         .with_data_directory(data_dir.join("webview"));
-    DB.set(db).expect("set once");
     dioxus::LaunchBuilder::desktop()
         .with_cfg(config)
-        .launch(root);
+        .with_context(StorePath(db.display().to_string()))
+        .launch(root_from_context);
 }

@@ -1,0 +1,262 @@
+// End-to-end: the app's real UI, served by `undercroft-liveview`, driven in Debian's Chromium
+// at phone size (390x844, touch) through a whole inspection: start it, add an area and a run
+// that is over its allowable span, a notch over its limit with a photo, read the findings,
+// build the report, then restart the server and find everything still there.
+//
+// Usage: node flow.mjs   (env UNDERCROFT_LIVEVIEW: the server binary, default
+// target/debug/undercroft-liveview; CHROMIUM: the browser, default /usr/bin/chromium).
+// Screenshots of every screen go to target/e2e-screens/.
+
+import { chromium } from "playwright-core";
+import { spawn, execFileSync } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import assert from "node:assert/strict";
+
+const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..");
+const server = process.env.UNDERCROFT_LIVEVIEW ?? path.join(repo, "target/debug/undercroft-liveview");
+const browserPath = process.env.CHROMIUM ?? "/usr/bin/chromium";
+const shots = path.join(repo, "target/e2e-screens");
+fs.mkdirSync(shots, { recursive: true });
+const work = fs.mkdtempSync(path.join(os.tmpdir(), "undercroft-e2e-"));
+const db = path.join(work, "store.sqlite");
+
+// Invented for this test.
+const ADDRESS = "88 Tamarack Hollow, Wendover Flats";
+const CLIENT = "Søren Ōkubo-Adeyemi";
+
+/** Starts the liveview server on a free port; resolves with the process and its address. */
+let running = null;
+function startServer() {
+  return new Promise((resolve, reject) => {
+    const proc = spawn(server, ["--db", db], { stdio: ["ignore", "pipe", "inherit"] });
+    running = proc;
+    let out = "";
+    const timer = setTimeout(() => reject(new Error("the server did not start in 30 s")), 30000);
+    proc.on("error", reject);
+    proc.on("exit", (code) => reject(new Error(`the server exited with ${code}`)));
+    proc.stdout.on("data", (chunk) => {
+      out += chunk;
+      const m = out.match(/listening on (http:\/\/\S+)/);
+      if (m) {
+        clearTimeout(timer);
+        resolve({ proc, url: m[1] });
+      }
+    });
+  });
+}
+
+function stopServer(proc) {
+  return new Promise((resolve) => {
+    proc.removeAllListeners("exit");
+    proc.on("exit", resolve);
+    proc.kill("SIGKILL");
+  });
+}
+
+let shotCount = 0;
+async function shot(page, name) {
+  shotCount += 1;
+  const file = path.join(shots, `${String(shotCount).padStart(2, "0")}-${name}.png`);
+  await page.screenshot({ path: file, fullPage: true });
+  console.log(`  screenshot ${path.relative(repo, file)}`);
+}
+
+/** A real JPEG (1600x1200) drawn and encoded by the browser itself. */
+async function makeJpeg(browser) {
+  const page = await browser.newPage();
+  const dataUrl = await page.evaluate(() => {
+    const c = document.createElement("canvas");
+    c.width = 1600;
+    c.height = 1200;
+    const g = c.getContext("2d");
+    const grad = g.createLinearGradient(0, 0, 1600, 1200);
+    grad.addColorStop(0, "#5a3d22");
+    grad.addColorStop(1, "#c9a06b");
+    g.fillStyle = grad;
+    g.fillRect(0, 0, 1600, 1200);
+    for (let y = 100; y < 1200; y += 180) {
+      g.fillStyle = "#e8cfa2";
+      g.fillRect(0, y, 1600, 90);
+    }
+    g.fillStyle = "#1b1b1b";
+    g.fillRect(600, 190, 120, 60);
+    g.font = "64px sans-serif";
+    g.fillText("notch", 760, 240);
+    return c.toDataURL("image/jpeg", 0.9);
+  });
+  await page.close();
+  return Buffer.from(dataUrl.split(",")[1], "base64");
+}
+
+async function tapLink(page, text) {
+  await page.getByRole("link", { name: text }).first().tap();
+}
+
+async function main() {
+  const browser = await chromium.launch({
+    executablePath: browserPath,
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--no-first-run",
+      "--disable-quic",
+    ],
+  });
+  const context = await browser.newContext({
+    viewport: { width: 390, height: 844 },
+    isMobile: true,
+    hasTouch: true,
+    deviceScaleFactor: 2,
+  });
+  let { proc, url } = await startServer();
+  const page = await context.newPage();
+  page.setDefaultTimeout(15000);
+  const jpeg = await makeJpeg(browser);
+
+  console.log("inspections: start one");
+  await page.goto(url);
+  await page.getByRole("heading", { name: "Inspections" }).waitFor();
+  assert.ok(await page.getByText("screening tool", { exact: false }).first().isVisible());
+  await shot(page, "inspections");
+  await page.locator("#new-address").fill(ADDRESS);
+  await page.locator("#new-client").fill(CLIENT);
+  await page.locator("#new-date").fill("2026-12-02");
+  await page.locator("#new-room").selectOption("living");
+  await page.locator("#start-inspection").tap();
+
+  console.log("inspection: add an area");
+  await page.getByRole("heading", { name: ADDRESS }).waitFor();
+  await shot(page, "inspection");
+  await page.locator("#area-name").fill("Crawlspace under the living room");
+  await page.locator("#add-area").tap();
+
+  console.log("area: add a joist run");
+  await page.getByRole("heading", { name: "Crawlspace under the living room" }).waitFor();
+  await shot(page, "area");
+  await page.locator("#run-label").fill("Joists from the rim to the girder");
+  await page.locator("#add-run").tap();
+
+  console.log("run: 2x10 SPF No. 2 at 16 in, 16 ft 0 in clear span");
+  await page.getByRole("heading", { name: "Joists from the rim to the girder" }).waitFor();
+  await page.locator("#species").selectOption("spruce-pine-fir");
+  await page.locator("#grade").selectOption("no2");
+  await page.locator("#size").selectOption("2x10");
+  await page.locator("#spacing").fill("16");
+  await page.locator("#clear-span").fill(`16' 0"`);
+  await page.locator("#bearing-on").selectOption("masonry");
+  await page.locator("#bearing-length").fill("3");
+  const card = page.locator("#live-check");
+  // Source: IRC 2018 Table R502.3.1(2) (40 psf live, 10 psf dead, L/360): 2x10 spruce-pine-fir
+  // No. 2 at 16 in allows 15-5, so 16-0 is over it. Bending governs the cell (NDS 2018
+  // Supplement Table 4A: Fb 875 psi x CF 1.1 x Cr 1.15 gives 15 ft 4.6 in; L/360 under the
+  // 40 psf live load with E 1,400,000 psi gives 15 ft 8 in).
+  await card.getByText("Allowable span 15' 5\"").waitFor();
+  const cardText = await card.innerText();
+  assert.match(cardText, /over/i, cardText);
+  assert.match(cardText, /bending governs/i, cardText);
+  assert.match(cardText, /104 %/, cardText);
+  await shot(page, "run");
+
+  console.log("observation: a 2 in notch 3 ft from the support");
+  await page.locator("#add-observation").selectOption("notch");
+  await page.getByRole("heading", { name: "Notch" }).waitFor();
+  await page.locator("#edge").selectOption("bottom");
+  await page.locator("#depth").fill("2");
+  await page.locator("#length").fill("3");
+  await page.locator("#from_support").fill("3'");
+  await page.locator("#end").selectOption("a");
+  const verdict = page.locator("#verdict");
+  await verdict.getByText("R502.8.1").waitFor();
+  const verdictText = await verdict.innerText();
+  assert.match(verdictText, /over/i, verdictText);
+  assert.ok(await page.locator("svg").first().isVisible(), "the side view is drawn");
+
+  console.log("photo: attach a JPEG to the notch");
+  await page.locator('input[type="file"]').setInputFiles({
+    name: "notch.jpg",
+    mimeType: "image/jpeg",
+    buffer: jpeg,
+  });
+  await page.getByText("notch.jpg added").waitFor();
+  await page.locator(".photos img").first().waitFor();
+  await shot(page, "observation");
+
+  console.log("findings: both, with citations");
+  await tapLink(page, ADDRESS);
+  await page.getByRole("heading", { name: ADDRESS }).waitFor();
+  const findingsLink = page.locator("#findings-link");
+  assert.match(await findingsLink.innerText(), /2 over a limit/);
+  await findingsLink.tap();
+  await page.getByRole("heading", { name: "Findings" }).waitFor();
+  const findings = await page.locator("main").innerText();
+  assert.match(findings, /R502\.3/, "the span finding cites its table");
+  assert.match(findings, /R502\.8\.1/, "the notch finding cites its section");
+  await shot(page, "findings");
+
+  console.log("report: build it");
+  await tapLink(page, ADDRESS);
+  await page.locator("#report-link").tap();
+  await page.getByRole("heading", { name: "Report" }).waitFor();
+  await page.locator("#build-report").tap();
+  await page.locator("#report-path").waitFor({ timeout: 60000 });
+  const pdfPath = (await page.locator("#report-path").innerText()).trim();
+  assert.match(await page.locator("#report-progress").innerText(), /Report ready/);
+  await shot(page, "report");
+  const pdf = fs.readFileSync(pdfPath);
+  assert.equal(pdf.subarray(0, 5).toString(), "%PDF-");
+  // pdfimages (poppler-utils) lists what the PDF holds: the photo as a JPEG, resized for the
+  // report (1280 px on its long side).
+  const images = execFileSync("pdfimages", ["-list", pdfPath]).toString();
+  assert.match(images, /\s1280\s+960\s+rgb\s+3\s+8\s+jpeg\s/, images);
+  const text = execFileSync("pdftotext", [pdfPath, "-"]).toString();
+  assert.ok(text.includes(ADDRESS), "the address is in the PDF");
+  assert.ok(text.includes("R502.8.1"), "the notch citation is in the PDF");
+
+  console.log("settings");
+  await page.goto(url);
+  await page.locator("#settings-link").tap();
+  await page.getByRole("heading", { name: "Settings" }).waitFor();
+  await shot(page, "settings");
+
+  console.log("restart the server (the app killed) and reload: everything is still there");
+  await stopServer(proc);
+  ({ proc, url } = await startServer());
+  await page.goto(url);
+  await page.locator("#search").fill("Tamarack");
+  await tapLink(page, ADDRESS);
+  await page.getByRole("heading", { name: ADDRESS }).waitFor();
+  assert.match(await page.locator("#findings-link").innerText(), /2 over a limit/);
+  await tapLink(page, "Crawlspace under the living room");
+  await tapLink(page, "Joists from the rim to the girder");
+  await page.locator("#live-check").getByText("Allowable span 15' 5\"").waitFor();
+  assert.equal(await page.locator("#clear-span").inputValue(), `16' 0"`);
+  assert.equal(await page.locator("#spacing").inputValue(), `16"`);
+  assert.equal(await page.locator("#size").inputValue(), "2x10");
+  await tapLink(page, "Notch");
+  await page.locator("#verdict").getByText("R502.8.1").waitFor();
+  assert.equal(await page.locator(".photos img").count(), 1, "the photo is still attached");
+  await page.reload();
+  await page.locator("#verdict").getByText("R502.8.1").waitFor();
+  await shot(page, "after-restart");
+  await tapLink(page, ADDRESS);
+  await page.locator("#report-link").tap();
+  await page.getByText(path.basename(pdfPath)).waitFor();
+
+  await browser.close();
+  await stopServer(proc);
+  fs.rmSync(work, { recursive: true, force: true });
+  console.log(`end-to-end flow passed (${shotCount} screenshots in ${path.relative(repo, shots)})`);
+}
+
+main().catch((e) => {
+  console.error(e);
+  if (running) running.kill("SIGKILL");
+  process.exit(1);
+});
