@@ -1,8 +1,8 @@
 //! The app's screens and their addresses.
 
 use crate::views::{
-    AreaView, Findings, InspectionView, Inspections, ObservationView, ReportView, RunView,
-    SettingsView,
+    AreaView, Findings, InspectionView, Inspections, MemberView, ObservationView, ReportView,
+    RunView, SettingsView,
 };
 use dioxus::prelude::*;
 
@@ -20,6 +20,9 @@ pub enum Route {
     /// One joist run: its framing, checked live as it is typed.
     #[route("/run/:id")]
     RunView { id: String },
+    /// One joist of a run, or a single member: its framing, observations and photos.
+    #[route("/member/:id")]
+    MemberView { id: String },
     /// One observation on a run or member (new when `id` is not stored yet): its fields,
     /// the verdict with its citation, and the side view, live.
     #[route("/observe/:owner/:kind/:id")]

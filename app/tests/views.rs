@@ -153,3 +153,39 @@ fn settings_and_report_screens() {
         "{html}"
     );
 }
+
+#[test]
+fn area_lists_single_members_and_adds_them() {
+    let html = render("/area/area-base");
+    assert!(html.contains("href=\"/member/member-hearth\""), "{html}");
+    assert!(html.contains("Add member"));
+}
+
+// Source: IRC 2015 Table R502.3.1(2) method (as in `run_shows_the_live_check`): joist 7 lists
+// nothing of its own framing, so it is checked with its run's 2x10 SPF No. 2 at 15' 2".
+#[test]
+fn a_joist_shows_its_run_values_and_is_checked_with_them() {
+    let html = render("/member/joist-k7");
+    assert!(html.contains("Same as the run: 15&#39; 2&#34;"), "{html}");
+    assert!(html.contains("Same as the run (No. 2)"), "{html}");
+    assert!(
+        html.contains("OVER LIMIT 108 % of the allowable span"),
+        "{html}"
+    );
+    assert!(html.contains("href=\"/observe/joist-k7/notch/obs-k7-notch\""));
+    assert!(html.contains("enter only what differs"));
+}
+
+#[test]
+fn a_single_member_shows_its_own_framing() {
+    let html = render("/member/member-hearth");
+    assert!(html.contains("Deep joist at the hearth"), "{html}");
+    assert!(
+        !html.contains("Same as the run"),
+        "a single member has no run"
+    );
+    assert!(html.contains("value=\"9&#39; 6&#34;\""), "{html}");
+    assert!(html.contains("End restraint") && html.contains("Bridging"));
+    let missing = render("/member/no-such-member");
+    assert!(missing.contains("This member is not in the store."));
+}

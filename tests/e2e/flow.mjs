@@ -249,6 +249,25 @@ async function main() {
   await page.locator("#report-link").tap();
   await page.getByText(path.basename(pdfPath)).waitFor();
 
+  console.log("a joist that differs from its run, and a single member");
+  await tapLink(page, ADDRESS);
+  await tapLink(page, "Crawlspace under the living room");
+  await tapLink(page, "Joists from the rim to the girder");
+  await page.locator("#add-joist").tap();
+  await page.getByText("enter only what differs").waitFor();
+  assert.equal(await page.locator("#clear-span").getAttribute("placeholder"), `Same as the run: 16' 0"`);
+  await page.locator("#clear-span").fill("13");
+  // Same table cell as above: 13 ft 0 in is 84 % of 15 ft 5 in (rounded as the card shows it).
+  await page.locator("#live-check").getByText("84 %").waitFor();
+  await shot(page, "joist");
+  await tapLink(page, "Joists from the rim to the girder");
+  await tapLink(page, "Crawlspace under the living room");
+  await page.locator("#member-name").fill("Header at the stair opening");
+  await page.locator("#add-member").tap();
+  await page.getByRole("heading", { name: "Header at the stair opening" }).waitFor();
+  await page.locator("#size").selectOption("2x12");
+  await shot(page, "member");
+
   await browser.close();
   await stopServer(proc);
   fs.rmSync(work, { recursive: true, force: true });

@@ -1,11 +1,15 @@
 //! Reusable widgets.
 
+mod framing_fields;
 mod live_card;
+mod observation_list;
 mod photos;
 mod side_view;
 mod status_badge;
 
+pub use framing_fields::{FieldChange, FramingFields};
 pub use live_card::LiveCard;
+pub use observation_list::ObservationList;
 pub use photos::Photos;
 pub use side_view::SideViewSvg;
 pub use status_badge::StatusBadge;

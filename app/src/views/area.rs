@@ -1,9 +1,10 @@
-//! One area: its joist runs and single members; add a run, copying the previous one's values.
+//! One area: its joist runs and single members; add a run (copying the previous one's values)
+//! or a single member.
 
 use crate::components::Photos;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::model::JoistRun;
+use undercroft_core::model::{JoistRun, Member};
 use undercroft_core::store::new_id;
 
 #[component]
@@ -11,6 +12,7 @@ pub fn AreaView(id: String) -> Element {
     let app = use_app();
     let mut label = use_signal(String::new);
     let mut copy = use_signal(|| true);
+    let mut member_label = use_signal(String::new);
     let mut error = use_signal(|| None::<String>);
     let found = {
         let store = app.store.borrow();
@@ -53,6 +55,29 @@ pub fn AreaView(id: String) -> Element {
             }
         }
     };
+    let add_member = {
+        let app = app.clone();
+        let area_id = id.clone();
+        move |_| {
+            let text = member_label();
+            let member = Member {
+                id: new_id(),
+                label: if text.trim().is_empty() {
+                    "Single member".into()
+                } else {
+                    text
+                },
+                framing: Default::default(),
+                observations: vec![],
+            };
+            match app.change(|s| s.add_member(&area_id, &member)) {
+                Ok(()) => {
+                    navigator().push(Route::MemberView { id: member.id });
+                }
+                Err(e) => error.set(Some(e)),
+            }
+        }
+    };
     rsx! {
         main {
             nav { class: "back", Link { to: Route::InspectionView { id: inspection.id.clone() }, "< {inspection.property.address}" } }
@@ -63,14 +88,18 @@ pub fn AreaView(id: String) -> Element {
                     li { key: "{run.id}", Link { to: Route::RunView { id: run.id.clone() }, "{run.label}" } }
                 }
             }
-            if !area.members.is_empty() {
-                h2 { "Single members" }
-                ul { class: "list",
-                    for m in area.members.iter() {
-                        li { key: "{m.id}", span { "{m.label}" } }
-                    }
+            h2 { "Single members" }
+            if area.members.is_empty() {
+                p { class: "muted", "None yet: a header, a lone joist, an engineered member." }
+            }
+            ul { class: "list",
+                for m in area.members.iter() {
+                    li { key: "{m.id}", Link { to: Route::MemberView { id: m.id.clone() }, "{m.label}" } }
                 }
             }
+            label { r#for: "member-name", "A single member" }
+            input { id: "member-name", placeholder: "Header at the stair opening", value: "{member_label}", oninput: move |e| member_label.set(e.value()) }
+            button { class: "quiet", id: "add-member", onclick: add_member, "Add member" }
             h2 { "Add a joist run" }
             label { r#for: "run-label", "Label" }
             input { id: "run-label", placeholder: "Joists between the rim and the girder", value: "{label}", oninput: move |e| label.set(e.value()) }

@@ -189,6 +189,8 @@ impl FramingForm {
                     format!("unknown bridging \"{}\"", self.bridging.trim()),
                 ),
             }
+        } else if interval.is_some() {
+            fail("bridging", "pick the kind of bridging".into());
         }
         (framing, errors)
     }

@@ -5,9 +5,11 @@
 mod framing_form;
 mod live_check;
 mod observation_form;
+mod picks;
 mod preview;
 
 pub use framing_form::{FieldError, FramingForm};
 pub use live_check::{live_check, LiveCheck};
 pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};
+pub use picks::{BRIDGING, END_RESTRAINTS, GRADES, MEMBER_KINDS, SIZES, SPECIES};
 pub use preview::{preview_observation, side_view_of};

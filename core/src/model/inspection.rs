@@ -71,6 +71,54 @@ impl Inspection {
             .iter()
             .find_map(|a| a.runs.iter().find(|r| r.id == id).map(|r| (a, r)))
     }
+
+    /// A joist of a run or a single member, with where it is.
+    pub fn member(&self, id: &str) -> Option<MemberAt<'_>> {
+        self.areas.iter().find_map(|area| {
+            let joist = area.runs.iter().find_map(|run| {
+                run.joists.iter().find(|j| j.id == id).map(|j| MemberAt {
+                    area,
+                    run: Some(run),
+                    id: &j.id,
+                    label: &j.label,
+                    framing: &j.framing,
+                    observations: &j.observations,
+                })
+            });
+            joist.or_else(|| {
+                area.members.iter().find(|m| m.id == id).map(|m| MemberAt {
+                    area,
+                    run: None,
+                    id: &m.id,
+                    label: &m.label,
+                    framing: &m.framing,
+                    observations: &m.observations,
+                })
+            })
+        })
+    }
+}
+
+/// A joist (its run given) or a single member (no run), found by id.
+#[derive(Debug, Clone, Copy)]
+pub struct MemberAt<'a> {
+    pub area: &'a Area,
+    pub run: Option<&'a JoistRun>,
+    pub id: &'a str,
+    pub label: &'a str,
+    /// For a joist, only what differs from its run.
+    pub framing: &'a Framing,
+    pub observations: &'a [Observation],
+}
+
+impl MemberAt<'_> {
+    /// The framing the checks use: a joist's own values over its run's.
+    pub fn effective_framing(&self) -> Framing {
+        match self.run {
+            Some(run) => self.framing.over(&run.framing),
+            None => self.framing.clone(),
+        }
+    }
 }
 
 fn default_edition() -> String {
@@ -187,4 +235,44 @@ pub struct PhotoRef {
     pub attached_to: String,
     #[serde(default)]
     pub caption: String,
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::lumber::NominalSize;
+    use crate::units::Length;
+
+    fn demo() -> super::Inspection {
+        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
+            .unwrap()
+    }
+
+    #[test]
+    fn a_joist_is_found_with_its_run_and_takes_the_run_values_it_does_not_list() {
+        let demo = demo();
+        let joist = demo.member("joist-k7").expect("joist 7 is in the demo");
+        assert_eq!(joist.run.map(|r| r.id.as_str()), Some("run-kitchen"));
+        assert_eq!(
+            joist.framing.size, None,
+            "the joist lists no size of its own"
+        );
+        let framing = joist.effective_framing();
+        assert_eq!(framing.size, Some("2x10".parse::<NominalSize>().unwrap()));
+        assert_eq!(framing.clear_span, Some(Length::inches(182.0)));
+        assert_eq!(joist.observations.len(), 3);
+    }
+
+    #[test]
+    fn a_single_member_stands_alone_and_runs_are_not_members() {
+        let demo = demo();
+        let member = demo.member("member-hearth").expect("the hearth member");
+        assert!(member.run.is_none());
+        assert_eq!(member.area.id, demo.areas[1].id);
+        assert_eq!(
+            member.effective_framing().size,
+            Some("2x14".parse::<NominalSize>().unwrap())
+        );
+        assert!(demo.member("run-kitchen").is_none());
+        assert!(demo.member("no-such-id").is_none());
+    }
 }

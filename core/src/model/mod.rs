@@ -10,8 +10,8 @@ pub use framing::{
     ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
 };
 pub use inspection::{
-    Area, AreaKind, Client, Inspection, InspectorInfo, Joist, JoistRun, Member, PhotoRef, Property,
-    FORMAT_NAME, FORMAT_VERSION,
+    Area, AreaKind, Client, Inspection, InspectorInfo, Joist, JoistRun, Member, MemberAt, PhotoRef,
+    Property, FORMAT_NAME, FORMAT_VERSION,
 };
 pub use load::{LoadSettings, ResolvedLoads, RoomUse};
 pub use observation::{DamageCause, Edge, End, Observation, ObservationKind, SagReading};

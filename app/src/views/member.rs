@@ -1,0 +1,87 @@
+//! One joist of a run (only what differs from the run is typed; the rest shows the run's
+//! values) or a single member: its framing with the live check, its observations, photos.
+
+use crate::components::{FieldChange, FramingFields, LiveCard, ObservationList, Photos};
+use crate::{use_app, Route};
+use dioxus::prelude::*;
+use undercroft_core::forms::{live_check, FieldError, FramingForm};
+
+#[component]
+pub fn MemberView(id: String) -> Element {
+    let app = use_app();
+    let inspection = {
+        let store = app.store.borrow();
+        store
+            .inspection_of(&id)
+            .and_then(|i| store.load_inspection(&i))
+            .ok()
+    };
+    let loaded = inspection.and_then(|i| {
+        let m = i.member(&id)?;
+        let parts = (
+            m.area.clone(),
+            m.run.cloned(),
+            m.framing.clone(),
+            m.label.to_string(),
+            m.observations.to_vec(),
+        );
+        Some((i, parts))
+    });
+    let Some((inspection, (area, run, stored, stored_label, observations))) = loaded else {
+        return rsx! { main { p { "This member is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
+    };
+    let units = inspection.units;
+    let base = run
+        .as_ref()
+        .map(|r| FramingForm::from_framing(&r.framing, units));
+    let mut form = use_signal(|| FramingForm::from_framing(&stored, units));
+    let mut label = use_signal(|| stored_label.clone());
+    let mut errors = use_signal(Vec::new);
+    let loads = area.loads.resolve(&inspection.loads);
+    // A joist is checked with the run's values where it lists none of its own.
+    let mut effective = form();
+    if let Some(base) = &base {
+        effective.fill_from(base);
+    }
+    let check = live_check(&effective, &loads, units);
+    let member_id = id.clone();
+    let save_app = app.clone();
+    let save = use_callback(move |(field, value): FieldChange| {
+        if field == "label" {
+            label.set(value);
+        } else {
+            form.with_mut(|f| f.set(field, value));
+        }
+        let (framing, field_errors) = form().merged_with(&stored, units);
+        errors.set(field_errors);
+        if let Err(message) = save_app.change(|s| s.update_member(&member_id, &label(), &framing)) {
+            errors.set(vec![FieldError {
+                field: "save",
+                message,
+            }]);
+        }
+    });
+    let back = match &run {
+        Some(r) => rsx! { Link { to: Route::RunView { id: r.id.clone() }, "< {r.label}" } },
+        None => rsx! { Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } },
+    };
+    rsx! {
+        main {
+            nav { class: "back", {back} }
+            h1 { "{label}" }
+            if run.is_some() {
+                p { class: "muted", "A joist of this run: enter only what differs from the run." }
+            }
+            LiveCard { check }
+            label { r#for: "member-label", "Label" }
+            input { id: "member-label", value: "{label}", oninput: move |e| save.call(("label", e.value())) }
+            FramingFields { form: form(), base, on_change: save }
+            for e in errors() {
+                p { class: "field-error", "{e.field}: {e.message}" }
+            }
+            h2 { "What was seen on it" }
+            ObservationList { owner: id.clone(), observations, units }
+            Photos { owner: id.clone() }
+        }
+    }
+}
