@@ -3,6 +3,7 @@
 //! check, the engine).
 
 pub mod components;
+pub mod edits;
 pub mod route;
 pub mod startup;
 pub mod state;

@@ -2,6 +2,7 @@
 //! values) or a single member: its framing with the live check, its observations, photos.
 
 use crate::components::{FieldChange, FramingFields, LiveCard, ObservationList, Photos};
+use crate::edits::{save_framing_field, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FieldError, FramingForm};
@@ -47,19 +48,27 @@ pub fn MemberView(id: String) -> Element {
     let member_id = id.clone();
     let save_app = app.clone();
     let save = use_callback(move |(field, value): FieldChange| {
-        if field == "label" {
+        let (field, value) = if field == "label" {
             label.set(value);
+            // The label is saved with the framing as it stands.
+            ("", String::new())
         } else {
-            form.with_mut(|f| f.set(field, value));
-        }
-        let (framing, field_errors) = form().merged_with(&stored, units);
-        errors.set(field_errors);
-        if let Err(message) = save_app.change(|s| s.update_member(&member_id, &label(), &framing)) {
-            errors.set(vec![FieldError {
+            (field, value)
+        };
+        let name = label();
+        let owner = FramingOwner::Member {
+            id: &member_id,
+            label: &name,
+        };
+        let saved = save_app.change(|s| {
+            save_framing_field(s, owner, &mut form.write(), &stored, units, field, value)
+        });
+        errors.set(saved.unwrap_or_else(|message| {
+            vec![FieldError {
                 field: "save",
                 message,
-            }]);
-        }
+            }]
+        }));
     });
     let back = match &run {
         Some(r) => rsx! { Link { to: Route::RunView { id: r.id.clone() }, "< {r.label}" } },

@@ -2,6 +2,7 @@
 //! joists that differ or carry their own observations; what was seen on its typical joist.
 
 use crate::components::{FieldChange, FramingFields, LiveCard, ObservationList, Photos};
+use crate::edits::{save_framing_field, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FieldError, FramingForm};
@@ -36,15 +37,19 @@ pub fn RunView(id: String) -> Element {
     // stored value.
     let save_app = app.clone();
     let save = use_callback(move |(field, value): FieldChange| {
-        form.with_mut(|f| f.set(field, value));
-        let (framing, field_errors) = form().merged_with(&stored, units);
-        errors.set(field_errors);
-        if let Err(message) = save_app.change(|s| s.update_run(&run_id, &label, &framing)) {
-            errors.set(vec![FieldError {
+        let owner = FramingOwner::Run {
+            id: &run_id,
+            label: &label,
+        };
+        let saved = save_app.change(|s| {
+            save_framing_field(s, owner, &mut form.write(), &stored, units, field, value)
+        });
+        errors.set(saved.unwrap_or_else(|message| {
+            vec![FieldError {
                 field: "save",
                 message,
-            }]);
-        }
+            }]
+        }));
     });
     let add_joist = {
         let app = app.clone();
