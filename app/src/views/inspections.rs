@@ -3,7 +3,7 @@
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::model::RoomUse;
-use undercroft_core::store::{ListFilter, NewInspection};
+use undercroft_core::store::{now_utc, ListFilter, NewInspection};
 
 #[component]
 pub fn Inspections() -> Element {
@@ -11,7 +11,8 @@ pub fn Inspections() -> Element {
     let mut search = use_signal(String::new);
     let mut address = use_signal(String::new);
     let mut client = use_signal(String::new);
-    let mut date = use_signal(String::new);
+    // Today (as UTC has it; the inspector can change it).
+    let mut date = use_signal(|| now_utc().chars().take(10).collect::<String>());
     let settings = app.store.borrow().settings().unwrap_or_default();
     let mut room = use_signal(|| {
         if settings.room_use_above == RoomUse::Sleeping {
