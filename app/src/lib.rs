@@ -19,9 +19,18 @@ use dioxus::prelude::*;
 /// The whole app: the shared state is provided by the caller (see `Root`).
 #[component]
 pub fn App() -> Element {
+    let app = use_app();
+    let screen = app
+        .store
+        .borrow()
+        .settings()
+        .map(|s| s.screen)
+        .unwrap_or_default();
     rsx! {
         style { {style::CSS} }
-        div { class: "notice", "Screening tool, not an engineering evaluation. Local codes govern; refer structural concerns to a licensed professional." }
-        Router::<Route> {}
+        div { class: "app screen-{screen.key()}",
+            div { class: "notice", "Screening tool, not an engineering evaluation. Local codes govern; refer structural concerns to a licensed professional." }
+            Router::<Route> {}
+        }
     }
 }

@@ -1,11 +1,16 @@
-//! The app's one stylesheet: large tap targets, high contrast, a dark scheme for dim light.
+//! The app's one stylesheet: large tap targets, high contrast, a dark scheme for dim light
+//! (chosen in settings, or as the device is set).
 
 pub const CSS: &str = r#"
-:root { --ink: #111; --paper: #fff; --muted: #555; --line: #bbb; --over: #9e1a1a; --near: #8a5a00; --ok: #1d5e2c; }
+.app { --ink: #111; --paper: #fff; --muted: #555; --line: #bbb; --over: #9e1a1a; --near: #8a5a00; --ok: #1d5e2c; }
+.app.screen-dark { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
 @media (prefers-color-scheme: dark) {
-  :root { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
+  .app.screen-device { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
 }
-body { margin: 0; font: 18px/1.4 system-ui, sans-serif; color: var(--ink); background: var(--paper); }
+body { margin: 0; font: 18px/1.4 system-ui, sans-serif; }
+.app { min-height: 100vh; color: var(--ink); background: var(--paper); }
+a { color: var(--ink); }
+input[type=checkbox] { width: 32px; height: 32px; min-height: 32px; vertical-align: middle; margin: 8px 8px 8px 0; accent-color: var(--ink); }
 main { padding: 12px 14px 80px; max-width: 720px; margin: 0 auto; }
 h1 { font-size: 24px; margin: 8px 0 12px; } h2 { font-size: 20px; margin: 18px 0 8px; }
 a, button, .tap { min-height: 48px; min-width: 48px; }
@@ -22,4 +27,5 @@ ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(-
 .status-over-limit { color: var(--over); } .status-near-limit { color: var(--near); } .status-within { color: var(--ok); }
 .notice { font-size: 13px; padding: 4px 14px; color: var(--muted); border-bottom: 1px solid var(--line); }
 nav.back { margin: 4px 0; }
+figure.side-view { margin: 8px 0; }
 "#;

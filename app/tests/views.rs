@@ -24,11 +24,9 @@ fn TestRoot() -> Element {
 
 /// The HTML of the screen at `path`, with the demo inspection in a fresh store.
 fn render(path: &str) -> String {
-    let dir = std::env::temp_dir().join(format!(
-        "undercroft-app-views-{}-{}",
-        std::process::id(),
-        path.replace('/', "_")
-    ));
+    static RENDERS: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
+    let n = RENDERS.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+    let dir = std::env::temp_dir().join(format!("undercroft-app-views-{}-{n}", std::process::id()));
     std::fs::create_dir_all(&dir).unwrap();
     let db = dir.join("store.sqlite");
     let demo = undercroft_core::interchange::from_json(include_str!(
@@ -188,4 +186,11 @@ fn a_single_member_shows_its_own_framing() {
     assert!(html.contains("End restraint") && html.contains("Bridging"));
     let missing = render("/member/no-such-member");
     assert!(missing.contains("This member is not in the store."));
+}
+
+#[test]
+fn the_screen_follows_the_setting() {
+    let html = render("/settings");
+    assert!(html.contains("class=\"app screen-device\""), "{html}");
+    assert!(html.contains("Dark, for dim light"));
 }

@@ -223,7 +223,14 @@ async function main() {
   await page.goto(url);
   await page.locator("#settings-link").tap();
   await page.getByRole("heading", { name: "Settings" }).waitFor();
+  await page.locator("#inspector-name").fill("Inés Marlowe-Tanaka");
   await shot(page, "settings");
+  // The dark screen, for dim crawlspaces: the rest of the screenshots are taken with it.
+  await page.locator("#screen").selectOption("dark");
+  await page.locator(".app.screen-dark").waitFor();
+  const background = await page.locator(".app").evaluate((e) => getComputedStyle(e).backgroundColor);
+  assert.equal(background, "rgb(16, 17, 20)", "the dark screen's paper colour");
+  await shot(page, "settings-dark");
 
   console.log("restart the server (the app killed) and reload: everything is still there");
   await stopServer(proc);
@@ -244,6 +251,7 @@ async function main() {
   assert.equal(await page.locator(".photos img").count(), 1, "the photo is still attached");
   await page.reload();
   await page.locator("#verdict").getByText("R502.8.1").waitFor();
+  assert.equal(await page.locator(".app.screen-dark").count(), 1, "the screen setting is kept");
   await shot(page, "after-restart");
   await tapLink(page, ADDRESS);
   await page.locator("#report-link").tap();

@@ -4,7 +4,7 @@
 use dioxus::prelude::*;
 use undercroft_core::report::SideView;
 
-const W: f64 = 360.0;
+const W: f64 = 300.0;
 const H: f64 = 130.0;
 const JOIST_H: f64 = 40.0;
 
@@ -29,18 +29,18 @@ pub fn SideViewSvg(view: SideView) -> Element {
                 line { x1: "{t1}", y1: "{base - JOIST_H - 12.0}", x2: "{t1}", y2: "{base + 6.0}", stroke: "currentColor", stroke_dasharray: "3 2" }
                 line { x1: "{t2}", y1: "{base - JOIST_H - 12.0}", x2: "{t2}", y2: "{base + 6.0}", stroke: "currentColor", stroke_dasharray: "3 2" }
                 for (k, label) in labels.iter().enumerate() {
-                    text { x: "{x(third * (k as f64 + 0.5))}", y: "{base - JOIST_H - 16.0}", font_size: "9", text_anchor: "middle", fill: "currentColor", "{label}" }
+                    text { x: "{x(third * (k as f64 + 0.5))}", y: "{base - JOIST_H - 16.0}", font_size: "10", text_anchor: "middle", fill: "currentColor", "{label}" }
                 }
                 for n in view.notches.iter() {
                     rect { x: "{x(n.x0.max(0.0))}", y: "{y(n.y1)}", width: "{((n.x1 - n.x0.max(0.0)) * sx).max(2.0)}", height: "{((n.y1 - n.y0) * sy).max(2.0)}",
                         fill: "white", stroke: if n.over { "#9e1a1a" } else { "#2a4f8a" }, stroke_width: "1.5" }
-                    text { x: "{x(n.x0.max(0.0))}", y: "{base + 24.0}", font_size: "9", fill: "currentColor", "{n.label}" if n.over { " (over)" } }
+                    text { x: "{x(n.x0.max(0.0))}", y: "{base + 24.0}", font_size: "10", fill: "currentColor", "{n.label}" if n.over { " (over)" } }
                 }
                 for c in view.holes.iter() {
                     circle { cx: "{x(c.x)}", cy: "{y(c.y)}", r: "{(c.r * sy).max(2.0)}", fill: "white", stroke: if c.over { "#9e1a1a" } else { "#2a4f8a" }, stroke_width: "1.5" }
-                    text { x: "{x(c.x)}", y: "{base + 36.0}", font_size: "9", fill: "currentColor", "{c.label}" if c.over { " (over)" } }
+                    text { x: "{x(c.x)}", y: "{base + 36.0}", font_size: "10", fill: "currentColor", "{c.label}" if c.over { " (over)" } }
                 }
-                text { x: "{W / 2.0}", y: "{H - 6.0}", font_size: "9", text_anchor: "middle", fill: "currentColor", "clear span {view.span_text}; depth {view.depth_text} drawn x{exaggeration}" }
+                text { x: "{W / 2.0}", y: "{H - 6.0}", font_size: "10", text_anchor: "middle", fill: "currentColor", "clear span {view.span_text}; depth {view.depth_text} drawn x{exaggeration}" }
             }
         }
     }

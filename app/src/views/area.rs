@@ -104,7 +104,7 @@ pub fn AreaView(id: String) -> Element {
             label { r#for: "run-label", "Label" }
             input { id: "run-label", placeholder: "Joists between the rim and the girder", value: "{label}", oninput: move |e| label.set(e.value()) }
             label {
-                input { r#type: "checkbox", checked: copy(), onchange: move |e| copy.set(e.checked()), style: "width:auto;min-height:auto" }
+                input { r#type: "checkbox", checked: copy(), onchange: move |e| copy.set(e.checked()) }
                 " Same values as the previous run"
             }
             if let Some(e) = error() {

@@ -90,7 +90,7 @@ pub fn Inspections() -> Element {
                 option { value: "sleeping", "Sleeping rooms (30 psf)" }
             }
             label {
-                input { r#type: "checkbox", id: "new-heavy", checked: heavy(), onchange: move |e| heavy.set(e.checked()), style: "width:auto;min-height:auto" }
+                input { r#type: "checkbox", id: "new-heavy", checked: heavy(), onchange: move |e| heavy.set(e.checked()) }
                 " Heavy finishes above (tile, stone): 20 psf dead load"
             }
             if let Some(e) = error() {

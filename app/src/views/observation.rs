@@ -99,7 +99,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
                         }
                     },
                     FieldType::Flag => rsx! {
-                        input { id: "{spec.name}", r#type: "checkbox", style: "width:auto;min-height:auto", checked: f.value(spec.name) == "true",
+                        input { id: "{spec.name}", r#type: "checkbox", checked: f.value(spec.name) == "true",
                             onchange: move |e| save.call((spec.name, e.checked().to_string())) }
                     },
                     FieldType::Readings | FieldType::Text => rsx! {

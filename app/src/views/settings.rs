@@ -1,9 +1,10 @@
-//! Settings: the inspector, units, code edition and default loads; saved as they change.
+//! Settings: the inspector, screen, units, code edition and default loads; saved as they
+//! change.
 
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::model::RoomUse;
-use undercroft_core::store::Settings;
+use undercroft_core::store::{Screen, Settings};
 use undercroft_core::units::UnitSystem;
 
 #[component]
@@ -31,6 +32,7 @@ pub fn SettingsView() -> Element {
                     RoomUse::Living
                 }
             }
+            "screen" => s.screen = Screen::from_key(&edit.1),
             _ => s.heavy_finish = edit.1 == "true",
         });
         let current = settings();
@@ -49,6 +51,12 @@ pub fn SettingsView() -> Element {
             input { id: "company", value: "{s.company}", oninput: move |e| save.call(("company", e.value())) }
             label { r#for: "license", "License number" }
             input { id: "license", value: "{s.license}", oninput: move |e| save.call(("license", e.value())) }
+            label { r#for: "screen", "Screen" }
+            select { id: "screen", onchange: move |e| save.call(("screen", e.value())),
+                for (value, text) in [(Screen::Device, "As the device is set"), (Screen::Dark, "Dark, for dim light"), (Screen::Light, "Light")] {
+                    option { value: value.key(), selected: s.screen == value, "{text}" }
+                }
+            }
             label { r#for: "units", "Units" }
             select { id: "units", onchange: move |e| save.call(("units", e.value())),
                 option { value: "imperial", selected: !metric, "Feet and inches" }
@@ -62,7 +70,7 @@ pub fn SettingsView() -> Element {
                 option { value: "sleeping", selected: sleeping, "Sleeping rooms (30 psf)" }
             }
             label {
-                input { r#type: "checkbox", style: "width:auto;min-height:auto", checked: s.heavy_finish, onchange: move |e| save.call(("heavy", e.checked().to_string())) }
+                input { r#type: "checkbox", checked: s.heavy_finish, onchange: move |e| save.call(("heavy", e.checked().to_string())) }
                 " Heavy finishes by default (20 psf dead load)"
             }
             if let Some(e) = error() {

@@ -19,7 +19,7 @@ pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::SCHEMA_VERSION;
 pub use notes::{DeliveredReport, FindingNote};
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
-pub use settings::Settings;
+pub use settings::{Screen, Settings};
 
 use rusqlite::Connection;
 use std::path::{Path, PathBuf};

@@ -17,6 +17,38 @@ pub struct Settings {
     pub code_edition: String,
     pub room_use_above: RoomUse,
     pub heavy_finish: bool,
+    /// Light or dark screen, or as the device is set.
+    pub screen: Screen,
+}
+
+/// The screen's colours: dark for dim crawlspaces, light for daylight, or the device's choice.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default, Serialize, Deserialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Screen {
+    #[default]
+    Device,
+    Light,
+    Dark,
+}
+
+impl Screen {
+    /// The value a pick list and a style class use.
+    pub fn key(self) -> &'static str {
+        match self {
+            Screen::Device => "device",
+            Screen::Light => "light",
+            Screen::Dark => "dark",
+        }
+    }
+
+    /// From `key()`; anything else follows the device.
+    pub fn from_key(key: &str) -> Screen {
+        match key {
+            "light" => Screen::Light,
+            "dark" => Screen::Dark,
+            _ => Screen::Device,
+        }
+    }
 }
 
 impl Default for Settings {
@@ -29,6 +61,7 @@ impl Default for Settings {
             code_edition: "IRC 2018".into(),
             room_use_above: RoomUse::Living,
             heavy_finish: false,
+            screen: Screen::Device,
         }
     }
 }
@@ -73,11 +106,23 @@ mod tests {
             inspector_name: "Tomasz".into(),
             units: UnitSystem::Metric,
             heavy_finish: true,
+            screen: Screen::Dark,
             ..Default::default()
         };
         store.save_settings(&mine).unwrap();
         drop(store);
         assert_eq!(Store::open(&db).unwrap().settings().unwrap(), mine);
         std::fs::remove_dir_all(&dir).ok();
+    }
+
+    #[test]
+    fn settings_saved_before_the_screen_choice_existed_still_read() {
+        let old: Settings =
+            serde_json::from_str(r#"{"inspector_name":"Ana","units":"metric"}"#).unwrap();
+        assert_eq!(old.inspector_name, "Ana");
+        assert_eq!(old.screen, Screen::Device);
+        for screen in [Screen::Device, Screen::Light, Screen::Dark] {
+            assert_eq!(Screen::from_key(screen.key()), screen);
+        }
     }
 }
