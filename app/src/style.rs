@@ -28,4 +28,7 @@ ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(-
 .notice { font-size: 13px; padding: 4px 14px; color: var(--muted); border-bottom: 1px solid var(--line); }
 nav.back { margin: 4px 0; }
 figure.side-view { margin: 8px 0; }
+.danger-zone { margin-top: 28px; border-top: 1px solid var(--line); padding-top: 8px; }
+button.danger { background: var(--over); border-color: var(--over); color: var(--paper); }
+button + button { margin-left: 8px; }
 "#;

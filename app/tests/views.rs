@@ -120,6 +120,10 @@ fn observation_shows_verdict_citation_and_side_view() {
         "photos can be added to a saved observation"
     );
     assert!(html.contains("accept=\"image/*\""));
+    assert!(
+        html.contains("href=\"/member/joist-k7\"") && html.contains("Remove this observation"),
+        "back up to the joist it is on, and a way to remove it"
+    );
     let fresh = render("/observe/run-dining/notch/new-one");
     assert!(fresh.contains("Distance from the support face"), "{fresh}");
 }

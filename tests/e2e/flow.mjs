@@ -29,6 +29,7 @@ const CLIENT = "Søren Ōkubo-Adeyemi";
 
 /** Starts the liveview server on a free port; resolves with the process and its address. */
 let running = null;
+let currentPage = null;
 function startServer() {
   return new Promise((resolve, reject) => {
     const proc = spawn(server, ["--db", db], { stdio: ["ignore", "pipe", "inherit"] });
@@ -95,6 +96,16 @@ async function tapLink(page, text) {
   await page.getByRole("link", { name: text }).first().tap();
 }
 
+/** Taps the back link at the top of each screen until the inspection's screen shows. */
+async function upToInspection(page) {
+  for (let n = 0; n < 5; n++) {
+    if ((await page.getByRole("heading", { name: ADDRESS }).count()) > 0) return;
+    await page.locator("nav.back a").tap();
+    await page.waitForTimeout(100);
+  }
+  await page.getByRole("heading", { name: ADDRESS }).waitFor();
+}
+
 async function main() {
   const browser = await chromium.launch({
     executablePath: browserPath,
@@ -117,7 +128,8 @@ async function main() {
   });
   let { proc, url } = await startServer();
   const page = await context.newPage();
-  page.setDefaultTimeout(15000);
+  currentPage = page;
+  page.setDefaultTimeout(30000);
   const jpeg = await makeJpeg(browser);
 
   console.log("inspections: start one");
@@ -189,8 +201,7 @@ async function main() {
   await shot(page, "observation");
 
   console.log("findings: both, with citations");
-  await tapLink(page, ADDRESS);
-  await page.getByRole("heading", { name: ADDRESS }).waitFor();
+  await upToInspection(page);
   const findingsLink = page.locator("#findings-link");
   assert.match(await findingsLink.innerText(), /2 over a limit/);
   await findingsLink.tap();
@@ -253,12 +264,12 @@ async function main() {
   await page.locator("#verdict").getByText("R502.8.1").waitFor();
   assert.equal(await page.locator(".app.screen-dark").count(), 1, "the screen setting is kept");
   await shot(page, "after-restart");
-  await tapLink(page, ADDRESS);
+  await upToInspection(page);
   await page.locator("#report-link").tap();
   await page.getByText(path.basename(pdfPath)).waitFor();
 
   console.log("a joist that differs from its run, and a single member");
-  await tapLink(page, ADDRESS);
+  await upToInspection(page);
   await tapLink(page, "Crawlspace under the living room");
   await tapLink(page, "Joists from the rim to the girder");
   await page.locator("#add-joist").tap();
@@ -268,7 +279,11 @@ async function main() {
   // Same table cell as above: 13 ft 0 in is 84 % of 15 ft 5 in (rounded as the card shows it).
   await page.locator("#live-check").getByText("84 %").waitFor();
   await shot(page, "joist");
-  await tapLink(page, "Joists from the rim to the girder");
+  // Removed again, in two taps; back on the run, it is gone.
+  await page.locator("#remove").tap();
+  await page.locator("#remove-confirm").tap();
+  await page.getByRole("heading", { name: "Joists from the rim to the girder" }).waitFor();
+  assert.equal(await page.getByRole("link", { name: /Joist 1/ }).count(), 0, "the joist is gone");
   await tapLink(page, "Crawlspace under the living room");
   await page.locator("#member-name").fill("Header at the stair opening");
   await page.locator("#add-member").tap();
@@ -282,8 +297,12 @@ async function main() {
   console.log(`end-to-end flow passed (${shotCount} screenshots in ${path.relative(repo, shots)})`);
 }
 
-main().catch((e) => {
+main().catch(async (e) => {
   console.error(e);
+  if (currentPage) {
+    await currentPage.screenshot({ path: path.join(shots, "failure.png"), fullPage: true }).catch(() => {});
+    console.error(`screenshot of the failure: ${path.relative(repo, path.join(shots, "failure.png"))}`);
+  }
   if (running) running.kill("SIGKILL");
   process.exit(1);
 });

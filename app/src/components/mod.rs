@@ -4,6 +4,7 @@ mod framing_fields;
 mod live_card;
 mod observation_list;
 mod photos;
+mod remove_button;
 mod side_view;
 mod status_badge;
 
@@ -11,5 +12,6 @@ pub use framing_fields::{FieldChange, FramingFields};
 pub use live_card::LiveCard;
 pub use observation_list::ObservationList;
 pub use photos::Photos;
+pub use remove_button::RemoveButton;
 pub use side_view::SideViewSvg;
 pub use status_badge::StatusBadge;

@@ -1,7 +1,9 @@
 //! One joist of a run (only what differs from the run is typed; the rest shows the run's
 //! values) or a single member: its framing with the live check, its observations, photos.
 
-use crate::components::{FieldChange, FramingFields, LiveCard, ObservationList, Photos};
+use crate::components::{
+    FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
+};
 use crate::edits::{save_framing_field, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
@@ -70,6 +72,17 @@ pub fn MemberView(id: String) -> Element {
             }]
         }));
     });
+    let up = match &run {
+        Some(r) => Route::RunView { id: r.id.clone() },
+        None => Route::AreaView {
+            id: area.id.clone(),
+        },
+    };
+    let what = if run.is_some() {
+        "this joist"
+    } else {
+        "this member"
+    };
     let back = match &run {
         Some(r) => rsx! { Link { to: Route::RunView { id: r.id.clone() }, "< {r.label}" } },
         None => rsx! { Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } },
@@ -91,6 +104,7 @@ pub fn MemberView(id: String) -> Element {
             h2 { "What was seen on it" }
             ObservationList { owner: id.clone(), observations, units }
             Photos { owner: id.clone() }
+            RemoveButton { id: id.clone(), what, then: up }
         }
     }
 }

@@ -1,7 +1,7 @@
 //! One observation: its fields laid out from core's field list, saved the moment they read,
 //! with the verdict and citation and the member's side view updating as it is typed.
 
-use crate::components::{Photos, SideViewSvg, StatusBadge};
+use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -73,9 +73,25 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
         .unwrap_or_default();
     let view = side_view_of(&inspection, &owner);
     let specs = fields_of(&f.kind);
+    // Back up to the run or member the observation is on.
+    let (up, up_name) = match (inspection.run(&owner), inspection.member(&owner)) {
+        (Some((_, run)), _) => (Route::RunView { id: run.id.clone() }, run.label.clone()),
+        (None, Some(member)) => (
+            Route::MemberView {
+                id: member.id.to_string(),
+            },
+            member.label.to_string(),
+        ),
+        (None, None) => (
+            Route::InspectionView {
+                id: inspection.id.clone(),
+            },
+            inspection.property.address.clone(),
+        ),
+    };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::InspectionView { id: inspection.id.clone() }, "< {inspection.property.address}" } }
+            nav { class: "back", Link { to: up.clone(), "< {up_name}" } }
             h1 { "{title}" }
             for finding in verdict.iter() {
                 div { class: "card", id: "verdict",
@@ -120,6 +136,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
             }
             if exists {
                 Photos { owner: id.clone() }
+                RemoveButton { id: id.clone(), what: "this observation", then: up.clone() }
             } else {
                 p { class: "muted", "Photos can be added once the observation is saved (its required fields filled)." }
             }

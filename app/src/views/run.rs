@@ -1,7 +1,9 @@
 //! One joist run: its framing as typed, saved on every change, with the live check card; its
 //! joists that differ or carry their own observations; what was seen on its typical joist.
 
-use crate::components::{FieldChange, FramingFields, LiveCard, ObservationList, Photos};
+use crate::components::{
+    FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
+};
 use crate::edits::{save_framing_field, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
@@ -92,6 +94,7 @@ pub fn RunView(id: String) -> Element {
             }
             button { class: "quiet", id: "add-joist", onclick: add_joist, "Add a joist of this run" }
             Photos { owner: id.clone() }
+            RemoveButton { id: id.clone(), what: "this run", then: Route::AreaView { id: area.id.clone() } }
         }
     }
 }
