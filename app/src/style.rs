@@ -10,7 +10,8 @@ pub const CSS: &str = r#"
 body { margin: 0; font: 18px/1.4 system-ui, sans-serif; }
 .app { min-height: 100vh; color: var(--ink); background: var(--paper); }
 a { color: var(--ink); }
-input[type=checkbox] { width: 32px; height: 32px; min-height: 32px; vertical-align: middle; margin: 8px 8px 8px 0; accent-color: var(--ink); }
+input[type=checkbox] { width: 44px; height: 44px; min-height: 44px; vertical-align: middle; margin: 4px 8px 4px 0; accent-color: var(--ink); }
+nav.back a, p > a, .card > a { display: inline-block; min-height: 44px; line-height: 44px; }
 main { padding: 12px 14px 80px; max-width: 720px; margin: 0 auto; }
 h1 { font-size: 24px; margin: 8px 0 12px; } h2 { font-size: 20px; margin: 18px 0 8px; }
 a, button, .tap { min-height: 48px; min-width: 48px; }

@@ -198,3 +198,11 @@ fn the_screen_follows_the_setting() {
     assert!(html.contains("class=\"app screen-device\""), "{html}");
     assert!(html.contains("Dark, for dim light"));
 }
+
+#[test]
+fn an_archived_inspection_can_be_brought_back() {
+    let html = render(&format!("/inspection/{DEMO}"));
+    assert!(html.contains("Archive it"), "{html}");
+    let list = render("/");
+    assert!(list.contains("Show archived inspections"), "{list}");
+}

@@ -57,8 +57,26 @@ function stopServer(proc) {
   });
 }
 
+/** Every visible control on the screen is at least 44 px each way (a gloved thumb). */
+async function assertTapTargets(page, screen) {
+  const small = await page.evaluate(() => {
+    const found = [];
+    for (const e of document.querySelectorAll("a, button, input, select, textarea, label.button")) {
+      const r = e.getBoundingClientRect();
+      const style = getComputedStyle(e);
+      if (r.width === 0 || r.height === 0 || style.visibility === "hidden" || r.right < 0) continue;
+      if (r.width < 44 || r.height < 44) {
+        found.push(`${e.tagName.toLowerCase()}${e.id ? "#" + e.id : ""} "${(e.textContent || e.value || "").trim().slice(0, 30)}" ${Math.round(r.width)}x${Math.round(r.height)}`);
+      }
+    }
+    return found;
+  });
+  assert.deepEqual(small, [], `controls under 44 px on the ${screen} screen`);
+}
+
 let shotCount = 0;
 async function shot(page, name) {
+  await assertTapTargets(page, name);
   shotCount += 1;
   const file = path.join(shots, `${String(shotCount).padStart(2, "0")}-${name}.png`);
   await page.screenshot({ path: file, fullPage: true });
@@ -290,6 +308,22 @@ async function main() {
   await page.getByRole("heading", { name: "Header at the stair opening" }).waitFor();
   await page.locator("#size").selectOption("2x12");
   await shot(page, "member");
+
+  console.log("archive the inspection, find it among the archived, bring it back");
+  await page.locator("nav.back a").tap();
+  await upToInspection(page);
+  await page.locator("#archive").tap();
+  await page.getByRole("heading", { name: "Inspections" }).waitFor();
+  assert.equal(await page.getByRole("link", { name: /Tamarack/ }).count(), 0, "hidden when archived");
+  await page.locator("#show-archived").tap();
+  await page.getByText("(archived)").waitFor();
+  await tapLink(page, ADDRESS);
+  await page.getByText("Archived: hidden from the list").waitFor();
+  await page.locator("#archive").tap();
+  await page.locator("nav.back a").tap();
+  await page.locator("#show-archived").tap();
+  await page.getByRole("link", { name: /Tamarack/ }).waitFor();
+  assert.equal(await page.getByText("(archived)").count(), 0);
 
   await browser.close();
   await stopServer(proc);

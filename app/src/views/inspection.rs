@@ -57,11 +57,12 @@ pub fn InspectionView(id: String) -> Element {
         }
     };
     let total_over = evaluation.count(Status::OverLimit);
+    let archived = app.store.borrow().is_archived(&id).unwrap_or(false);
     let archive = {
         let app = app.clone();
         let id = id.clone();
         move |_| {
-            if app.change(|s| s.archive_inspection(&id, true)).is_ok() {
+            if app.change(|s| s.archive_inspection(&id, !archived)).is_ok() && !archived {
                 navigator().push(Route::Inspections {});
             }
         }
@@ -100,7 +101,12 @@ pub fn InspectionView(id: String) -> Element {
             }
             button { id: "add-area", onclick: add, "Add area" }
             h2 { "This inspection" }
-            button { class: "quiet", id: "archive", onclick: archive, "Archive it (hidden from the list, kept)" }
+            if archived {
+                p { class: "status", "Archived: hidden from the list of inspections." }
+                button { class: "quiet", id: "archive", onclick: archive, "Bring it back to the list" }
+            } else {
+                button { class: "quiet", id: "archive", onclick: archive, "Archive it (hidden from the list, kept)" }
+            }
         }
     }
 }

@@ -9,6 +9,7 @@ use undercroft_core::store::{now_utc, ListFilter, NewInspection};
 pub fn Inspections() -> Element {
     let app = use_app();
     let mut search = use_signal(String::new);
+    let mut show_archived = use_signal(|| false);
     let mut address = use_signal(String::new);
     let mut client = use_signal(String::new);
     // Today (as UTC has it; the inspector can change it).
@@ -28,7 +29,7 @@ pub fn Inspections() -> Element {
         .borrow()
         .list_inspections(&ListFilter {
             search: search(),
-            include_archived: false,
+            include_archived: show_archived(),
         })
         .unwrap_or_default();
     let start = {
@@ -63,6 +64,10 @@ pub fn Inspections() -> Element {
             h1 { "Inspections" }
             p { Link { to: Route::SettingsView {}, id: "settings-link", "Settings" } }
             input { r#type: "search", id: "search", placeholder: "Search address or client", value: "{search}", oninput: move |e| search.set(e.value()) }
+            label {
+                input { r#type: "checkbox", id: "show-archived", checked: show_archived(), onchange: move |e| show_archived.set(e.checked()) }
+                " Show archived inspections"
+            }
             if list.is_empty() {
                 p { class: "muted", "No inspections yet." }
             }
@@ -73,6 +78,9 @@ pub fn Inspections() -> Element {
                             "{s.address}"
                             br {}
                             span { class: "muted", "{s.client_name} {s.date}" }
+                            if s.archived {
+                                span { class: "muted", " (archived)" }
+                            }
                         }
                     }
                 }

@@ -132,6 +132,22 @@ impl Store {
         found(changed, id)
     }
 
+    /// Whether an inspection is archived.
+    pub fn is_archived(&self, id: &str) -> Result<bool> {
+        let stamp: Option<Option<String>> = self
+            .conn
+            .query_row(
+                "SELECT archived_at FROM inspections WHERE id = ?1",
+                [id],
+                |r| r.get(0),
+            )
+            .optional()?;
+        match stamp {
+            Some(stamp) => Ok(stamp.is_some()),
+            None => Err(StoreError::NotFound(id.to_string())),
+        }
+    }
+
     /// Deletes an inspection with everything in it; its photo files go when no other photo
     /// uses them.
     pub fn delete_inspection(&mut self, id: &str) -> Result<()> {

@@ -94,7 +94,9 @@ fn create_list_search_rename_archive_delete() {
         a,
         "a change moves it to the top"
     );
+    assert!(!store.is_archived(&a).unwrap());
     store.archive_inspection(&a, true).unwrap();
+    assert!(store.is_archived(&a).unwrap());
     assert_eq!(
         store
             .list_inspections(&ListFilter::default())
