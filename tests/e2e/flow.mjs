@@ -83,29 +83,39 @@ async function shot(page, name) {
   console.log(`  screenshot ${path.relative(repo, file)}`);
 }
 
-/** A real JPEG (1600x1200) drawn and encoded by the browser itself. */
-async function makeJpeg(browser) {
+/** A real JPEG drawn and encoded by the browser itself (1600x1200 unless told). */
+async function makeJpeg(browser, width = 1600, height = 1200) {
   const page = await browser.newPage();
-  const dataUrl = await page.evaluate(() => {
+  const dataUrl = await page.evaluate(([width, height]) => {
     const c = document.createElement("canvas");
-    c.width = 1600;
-    c.height = 1200;
+    c.width = width;
+    c.height = height;
     const g = c.getContext("2d");
     const grad = g.createLinearGradient(0, 0, 1600, 1200);
     grad.addColorStop(0, "#5a3d22");
     grad.addColorStop(1, "#c9a06b");
     g.fillStyle = grad;
-    g.fillRect(0, 0, 1600, 1200);
-    for (let y = 100; y < 1200; y += 180) {
+    g.fillRect(0, 0, width, height);
+    for (let y = 100; y < height; y += 180) {
       g.fillStyle = "#e8cfa2";
-      g.fillRect(0, y, 1600, 90);
+      g.fillRect(0, y, width, 90);
+    }
+    // Sensor-like noise, so a large photo's file is as large as a phone's.
+    if (width * height > 4e6) {
+      const pixels = g.getImageData(0, 0, width, height);
+      let seed = 7;
+      for (let i = 0; i < pixels.data.length; i++) {
+        seed = (seed * 1664525 + 1013904223) >>> 0;
+        pixels.data[i] = Math.max(0, Math.min(255, pixels.data[i] + ((seed >>> 24) % 24) - 12));
+      }
+      g.putImageData(pixels, 0, 0);
     }
     g.fillStyle = "#1b1b1b";
     g.fillRect(600, 190, 120, 60);
     g.font = "64px sans-serif";
     g.fillText("notch", 760, 240);
     return c.toDataURL("image/jpeg", 0.9);
-  });
+  }, [width, height]);
   await page.close();
   return Buffer.from(dataUrl.split(",")[1], "base64");
 }
@@ -307,6 +317,13 @@ async function main() {
   await page.locator("#add-member").tap();
   await page.getByRole("heading", { name: "Header at the stair opening" }).waitFor();
   await page.locator("#size").selectOption("2x12");
+  // A 12 MP photo, as a phone takes it, through the same file input (timed, not asserted).
+  const big = await makeJpeg(browser, 4000, 3000);
+  const started = Date.now();
+  await page.locator('input[type="file"]').setInputFiles({ name: "header.jpg", mimeType: "image/jpeg", buffer: big });
+  await page.getByText("header.jpg added").waitFor({ timeout: 60000 });
+  await page.locator(".photos img").first().waitFor();
+  console.log(`  a 4000x3000 photo (${(big.length / 1e6).toFixed(1)} MB) was attached in ${Date.now() - started} ms`);
   await shot(page, "member");
 
   console.log("archive the inspection, find it among the archived, bring it back");
