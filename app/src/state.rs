@@ -3,7 +3,9 @@
 use dioxus::prelude::*;
 use std::cell::RefCell;
 use std::rc::Rc;
+use undercroft_core::model::Inspection;
 use undercroft_core::store::Store;
+use undercroft_core::{evaluate, Evaluation};
 
 /// What every screen can reach. Cheap to clone (shared handles).
 #[derive(Clone)]
@@ -11,6 +13,8 @@ pub struct AppState {
     pub store: Rc<RefCell<Store>>,
     /// Bumped after every change, so screens that read the store render again.
     pub revision: Signal<u64>,
+    /// The last evaluation: (revision, inspection id, findings), computed once per change.
+    evaluated: Rc<RefCell<Option<(u64, String, Rc<Evaluation>)>>>,
 }
 
 impl AppState {
@@ -18,7 +22,23 @@ impl AppState {
         AppState {
             store: Rc::new(RefCell::new(store)),
             revision: Signal::new(0),
+            evaluated: Rc::default(),
         }
+    }
+
+    /// The findings of `inspection` as stored now: evaluated once per change, shared by the
+    /// screens that show it.
+    pub fn evaluation(&self, inspection: &Inspection) -> Rc<Evaluation> {
+        let revision = *self.revision.peek();
+        let mut cached = self.evaluated.borrow_mut();
+        if let Some((at, id, evaluation)) = cached.as_ref() {
+            if *at == revision && *id == inspection.id {
+                return evaluation.clone();
+            }
+        }
+        let evaluation = Rc::new(evaluate(inspection));
+        *cached = Some((revision, inspection.id.clone(), evaluation.clone()));
+        evaluation
     }
 
     /// Runs a change against the store (saved when it returns) and refreshes the screens.

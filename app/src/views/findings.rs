@@ -5,7 +5,6 @@
 use crate::components::StatusBadge;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::evaluate;
 use undercroft_core::store::FindingNote;
 
 /// One finding as the screen shows it.
@@ -36,7 +35,7 @@ pub fn Findings(id: String) -> Element {
     let Ok(inspection) = loaded else {
         return rsx! { main { p { "This inspection is not in the store." } } };
     };
-    let evaluation = evaluate(&inspection);
+    let evaluation = app.evaluation(&inspection);
     let rows: Vec<Row> = evaluation
         .by_attention()
         .into_iter()

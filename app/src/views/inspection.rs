@@ -4,7 +4,7 @@ use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::model::{Area, AreaKind};
 use undercroft_core::store::new_id;
-use undercroft_core::{evaluate, Status};
+use undercroft_core::Status;
 
 #[component]
 pub fn InspectionView(id: String) -> Element {
@@ -16,7 +16,7 @@ pub fn InspectionView(id: String) -> Element {
     let Ok(inspection) = loaded else {
         return rsx! { main { p { "This inspection is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
     };
-    let evaluation = evaluate(&inspection);
+    let evaluation = app.evaluation(&inspection);
     let over_in = |area_id: &str| {
         evaluation
             .findings

@@ -5,7 +5,7 @@ use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
-    fields_of, preview_observation, side_view_of, FieldType, ObservationForm, KINDS,
+    fields_of, preview_observation, side_view_with, FieldType, ObservationForm, KINDS,
 };
 
 #[component]
@@ -35,6 +35,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
     let mut errors = use_signal(Vec::new);
     let exists = stored.is_some();
     let (owner_id, obs_id) = (owner.clone(), id.clone());
+    let evaluation = app.evaluation(&inspection);
     let save = use_callback(move |(field, value): (&'static str, String)| {
         form.with_mut(|f| {
             if field == "note" {
@@ -71,7 +72,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
         .ok()
         .map(|o| preview_observation(&inspection, &owner, &o))
         .unwrap_or_default();
-    let view = side_view_of(&inspection, &owner);
+    let view = side_view_with(&inspection, &owner, &evaluation);
     let specs = fields_of(&f.kind);
     // Back up to the run or member the observation is on.
     let (up, up_name) = match (inspection.run(&owner), inspection.member(&owner)) {

@@ -3,7 +3,7 @@
 
 use crate::model::{Inspection, Observation};
 use crate::report::SideView;
-use crate::{evaluate, Finding};
+use crate::{evaluate, Evaluation, Finding};
 
 /// Puts `observation` on the run or member `owner_id` (replacing one with the same id).
 fn with_observation(
@@ -55,14 +55,22 @@ pub fn preview_observation(
 /// The side view of a run (its typical joist), joist or member, when it has notches, holes or
 /// sag readings and its span and depth are known.
 pub fn side_view_of(inspection: &Inspection, member_id: &str) -> Option<SideView> {
-    let evaluation = evaluate(inspection);
+    side_view_with(inspection, member_id, &evaluate(inspection))
+}
+
+/// `side_view_of` with the inspection's evaluation already at hand.
+pub fn side_view_with(
+    inspection: &Inspection,
+    member_id: &str,
+    evaluation: &Evaluation,
+) -> Option<SideView> {
     let (contexts, _) = crate::validate::members(inspection);
     let ctx = contexts.iter().find(|c| c.member_id() == member_id)?;
     let area = inspection
         .areas
         .iter()
         .find(|a| *a.id == *ctx.place.area_id)?;
-    crate::report::side_view_for(ctx, &area.name, &evaluation)
+    crate::report::side_view_for(ctx, &area.name, evaluation)
 }
 
 #[cfg(test)]
