@@ -7,6 +7,9 @@ use undercroft_core::model::Inspection;
 use undercroft_core::store::Store;
 use undercroft_core::{evaluate, Evaluation};
 
+/// An evaluation and what it was made of: (revision, inspection id, findings).
+type Evaluated = (u64, String, Rc<Evaluation>);
+
 /// What every screen can reach. Cheap to clone (shared handles).
 #[derive(Clone)]
 pub struct AppState {
@@ -14,7 +17,7 @@ pub struct AppState {
     /// Bumped after every change, so screens that read the store render again.
     pub revision: Signal<u64>,
     /// The last evaluation: (revision, inspection id, findings), computed once per change.
-    evaluated: Rc<RefCell<Option<(u64, String, Rc<Evaluation>)>>>,
+    evaluated: Rc<RefCell<Option<Evaluated>>>,
 }
 
 impl AppState {
