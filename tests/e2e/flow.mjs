@@ -226,6 +226,16 @@ async function main() {
   });
   await page.getByText("notch.jpg added").waitFor();
   await page.locator(".photos img").first().waitFor();
+  // A file that is not a photo is refused with a reason, and nothing else changes.
+  await page.locator('input[type="file"]').setInputFiles({
+    name: "notes.txt",
+    mimeType: "text/plain",
+    buffer: Buffer.from("not a photo\n"),
+  });
+  const refused = await page.getByText("notes.txt was not added").innerText();
+  assert.match(refused, /not added: .+/, refused);
+  console.log(`  ${refused}`);
+  assert.equal(await page.locator(".photos img").count(), 1, "the one photo is still there");
   await shot(page, "observation");
 
   console.log("findings: both, with citations");
