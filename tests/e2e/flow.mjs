@@ -20,6 +20,7 @@ const server = process.env.UNDERCROFT_LIVEVIEW ?? path.join(repo, "target/debug/
 const browserPath = process.env.CHROMIUM ?? "/usr/bin/chromium";
 const shots = path.join(repo, "target/e2e-screens");
 fs.mkdirSync(shots, { recursive: true });
+fs.rmSync(path.join(shots, "failure.png"), { force: true });
 const work = fs.mkdtempSync(path.join(os.tmpdir(), "undercroft-e2e-"));
 const db = path.join(work, "store.sqlite");
 
