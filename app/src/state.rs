@@ -1,10 +1,13 @@
 //! The app's shared state: the open store, handed to every screen through context.
 
+use crate::edits::{save_framing_field, FramingOwner};
 use dioxus::prelude::*;
 use std::cell::RefCell;
 use std::rc::Rc;
-use undercroft_core::model::Inspection;
+use undercroft_core::forms::{FieldError, FramingForm};
+use undercroft_core::model::{Framing, Inspection};
 use undercroft_core::store::Store;
+use undercroft_core::units::UnitSystem;
 use undercroft_core::{evaluate, Evaluation};
 
 /// An evaluation and what it was made of: (revision, inspection id, findings).
@@ -42,6 +45,34 @@ impl AppState {
         let evaluation = Rc::new(evaluate(inspection));
         *cached = Some((revision, inspection.id.clone(), evaluation.clone()));
         evaluation
+    }
+
+    /// The stored inspection that holds the area, run, joist, member or observation `id`.
+    pub fn inspection_holding(&self, id: &str) -> Option<Inspection> {
+        let store = self.store.borrow();
+        store
+            .inspection_of(id)
+            .and_then(|i| store.load_inspection(&i))
+            .ok()
+    }
+
+    /// A framing field change on a run, joist or member, saved at once: the problems to show
+    /// beside the fields (a failed save is one of them, under "save").
+    pub fn save_framing(
+        &self,
+        owner: FramingOwner,
+        form: &mut FramingForm,
+        stored: &Framing,
+        units: UnitSystem,
+        (field, value): (&str, String),
+    ) -> Vec<FieldError> {
+        self.change(|s| save_framing_field(s, owner, form, stored, units, field, value))
+            .unwrap_or_else(|message| {
+                vec![FieldError {
+                    field: "save",
+                    message,
+                }]
+            })
     }
 
     /// Runs a change against the store (saved when it returns) and refreshes the screens.

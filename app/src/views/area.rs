@@ -14,14 +14,8 @@ pub fn AreaView(id: String) -> Element {
     let mut copy = use_signal(|| true);
     let mut member_label = use_signal(String::new);
     let mut error = use_signal(|| None::<String>);
-    let found = {
-        let store = app.store.borrow();
-        store
-            .inspection_of(&id)
-            .and_then(|i| store.load_inspection(&i))
-    };
-    let Some((inspection, area)) = found
-        .ok()
+    let Some((inspection, area)) = app
+        .inspection_holding(&id)
         .and_then(|i| i.area(&id).cloned().map(|a| (i, a)))
     else {
         return rsx! { main { p { "This area is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
@@ -31,14 +25,10 @@ pub fn AreaView(id: String) -> Element {
     let add = {
         let app = app.clone();
         move |_| {
-            let text = label();
+            let label_text = label();
             let run = JoistRun {
                 id: new_id(),
-                label: if text.trim().is_empty() {
-                    "Joist run".into()
-                } else {
-                    text
-                },
+                label: label_or(label_text, "Joist run"),
                 framing: if copy() {
                     previous.clone().unwrap_or_default()
                 } else {
@@ -59,14 +49,10 @@ pub fn AreaView(id: String) -> Element {
         let app = app.clone();
         let area_id = id.clone();
         move |_| {
-            let text = member_label();
+            let label_text = member_label();
             let member = Member {
                 id: new_id(),
-                label: if text.trim().is_empty() {
-                    "Single member".into()
-                } else {
-                    text
-                },
+                label: label_or(label_text, "Single member"),
                 framing: Default::default(),
                 observations: vec![],
             };
@@ -113,5 +99,14 @@ pub fn AreaView(id: String) -> Element {
             button { id: "add-run", onclick: add, "Add run" }
             Photos { owner: id.clone() }
         }
+    }
+}
+
+/// What was typed as a label, or `default` when nothing was.
+fn label_or(typed: String, default: &str) -> String {
+    if typed.trim().is_empty() {
+        default.to_string()
+    } else {
+        typed
     }
 }

@@ -4,22 +4,15 @@
 use crate::components::{
     FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
 };
-use crate::edits::{save_framing_field, FramingOwner};
+use crate::edits::FramingOwner;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FieldError, FramingForm};
+use undercroft_core::forms::{live_check, FramingForm};
 
 #[component]
 pub fn MemberView(id: String) -> Element {
     let app = use_app();
-    let inspection = {
-        let store = app.store.borrow();
-        store
-            .inspection_of(&id)
-            .and_then(|i| store.load_inspection(&i))
-            .ok()
-    };
-    let loaded = inspection.and_then(|i| {
+    let loaded = app.inspection_holding(&id).and_then(|i| {
         let m = i.member(&id)?;
         let parts = (
             m.area.clone(),
@@ -62,15 +55,7 @@ pub fn MemberView(id: String) -> Element {
             id: &member_id,
             label: &name,
         };
-        let saved = save_app.change(|s| {
-            save_framing_field(s, owner, &mut form.write(), &stored, units, field, value)
-        });
-        errors.set(saved.unwrap_or_else(|message| {
-            vec![FieldError {
-                field: "save",
-                message,
-            }]
-        }));
+        errors.set(save_app.save_framing(owner, &mut form.write(), &stored, units, (field, value)));
     });
     let up = match &run {
         Some(r) => Route::RunView { id: r.id.clone() },

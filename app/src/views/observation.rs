@@ -11,19 +11,12 @@ use undercroft_core::forms::{
 #[component]
 pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
     let app = use_app();
-    let (inspection, stored) = {
-        let store = app.store.borrow();
-        let inspection = store
-            .inspection_of(&owner)
-            .and_then(|i| store.load_inspection(&i))
-            .ok();
-        let stored = inspection.as_ref().and_then(|i| {
-            i.observations()
-                .find(|(_, o)| *o.id == *id)
-                .map(|(_, o)| o.clone())
-        });
-        (inspection, stored)
-    };
+    let inspection = app.inspection_holding(&owner);
+    let stored = inspection.as_ref().and_then(|i| {
+        i.observations()
+            .find(|(_, o)| *o.id == *id)
+            .map(|(_, o)| o.clone())
+    });
     let Some(inspection) = inspection else {
         return rsx! { main { p { "This member is not in the store." } } };
     };

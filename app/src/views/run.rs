@@ -4,23 +4,17 @@
 use crate::components::{
     FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
 };
-use crate::edits::{save_framing_field, FramingOwner};
+use crate::edits::FramingOwner;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FieldError, FramingForm};
+use undercroft_core::forms::{live_check, FramingForm};
 use undercroft_core::model::Joist;
 use undercroft_core::store::new_id;
 
 #[component]
 pub fn RunView(id: String) -> Element {
     let app = use_app();
-    let found = {
-        let store = app.store.borrow();
-        store
-            .inspection_of(&id)
-            .and_then(|i| store.load_inspection(&i))
-    };
-    let Some((inspection, area, run)) = found.ok().and_then(|i| {
+    let Some((inspection, area, run)) = app.inspection_holding(&id).and_then(|i| {
         i.run(&id)
             .map(|(a, r)| (a.clone(), r.clone()))
             .map(|(a, r)| (i, a, r))
@@ -38,20 +32,12 @@ pub fn RunView(id: String) -> Element {
     // Every change is saved the moment it is made; a field that does not read yet keeps its
     // stored value.
     let save_app = app.clone();
-    let save = use_callback(move |(field, value): FieldChange| {
+    let save = use_callback(move |change: FieldChange| {
         let owner = FramingOwner::Run {
             id: &run_id,
             label: &label,
         };
-        let saved = save_app.change(|s| {
-            save_framing_field(s, owner, &mut form.write(), &stored, units, field, value)
-        });
-        errors.set(saved.unwrap_or_else(|message| {
-            vec![FieldError {
-                field: "save",
-                message,
-            }]
-        }));
+        errors.set(save_app.save_framing(owner, &mut form.write(), &stored, units, change));
     });
     let add_joist = {
         let app = app.clone();
