@@ -213,6 +213,8 @@ async function main() {
   await page.locator("#length").fill("3");
   await page.locator("#from_support").fill("3'");
   await page.locator("#end").selectOption("a");
+  // Source: IRC 2018 R502.8.1: notches in the outer third of the span at most one-sixth of
+  // the depth; 9-1/4 in / 6 = 1-9/16 in, so a 2 in notch is over.
   const verdict = page.locator("#verdict");
   await verdict.getByText("R502.8.1").waitFor();
   const verdictText = await verdict.innerText();
