@@ -4,7 +4,7 @@
 use std::collections::{BTreeMap, BTreeSet};
 use undercroft_core::interchange::{from_json_bytes, to_json};
 use undercroft_core::rules::RULES;
-use undercroft_core::{evaluate, Status};
+use undercroft_core::{evaluate, Basis, Status};
 use undercroft_tests::demo_path;
 
 fn demo() -> undercroft_core::Inspection {
@@ -26,12 +26,14 @@ fn demo_round_trips_through_json() {
 }
 
 /// Rules that report only one way by nature: options exist only for an over-span; engineered
-/// cuts are always a finding; engineered holes defer to the maker; damage is recorded.
-const ONE_WAY_RULES: [&str; 4] = [
+/// cuts are always a finding; engineered holes defer to the maker; damage and cuts in sawn
+/// joists are observed conditions to be evaluated.
+const ONE_WAY_RULES: [&str; 5] = [
     "span-options",
     "engineered-cut",
     "engineered-hole",
     "wood-damage",
+    "sawn-cut",
 ];
 
 #[test]
@@ -82,6 +84,12 @@ fn every_finding_carries_citation_and_recommendation() {
                 "{} says not why",
                 f.rule_id()
             ),
+            Status::ToEvaluate => assert_eq!(f.basis, Basis::Observed, "{}", f.rule_id()),
+            Status::Incomplete => assert!(
+                f.not_checked_because.is_some() && f.measured().is_some(),
+                "{} names no unchecked limit",
+                f.rule_id()
+            ),
             _ => assert!(
                 f.measured().is_some() && f.limit().is_some(),
                 "{} lacks measured or limit",
@@ -99,8 +107,8 @@ fn demo_findings_snapshot() {
         .iter()
         .map(|f| {
             format!(
-                "{:<12} {:<17} {:>5} {} | {} | {} -> {}",
-                f.status.label(),
+                "{:<17} {:<17} {:>5} {} | {} | {} -> {}",
+                f.status_label(),
                 f.rule_id(),
                 f.use_text().unwrap_or_default(),
                 f.place.location,
@@ -111,4 +119,52 @@ fn demo_findings_snapshot() {
         })
         .collect();
     insta::assert_snapshot!(lines.join("\n"));
+}
+
+/// Decay at a bearing and a joist cut through for a duct reach the top of the attention
+/// order as observed conditions, right after what is over a limit; the decayed end's bearing
+/// counts only its sound wood, and the family room (in a sleeping-room area) is held to
+/// 40 psf. Source: IRC 2018 Table R301.5 (40 psf for rooms other than sleeping rooms);
+/// R502.6 (3 in on masonry).
+#[test]
+fn observed_damage_reaches_the_top_and_shortens_the_bearing() {
+    let evaluation = evaluate(&demo());
+    let order: Vec<Status> = evaluation.by_attention().iter().map(|f| f.status).collect();
+    let first_observed = order.iter().position(|s| *s == Status::ToEvaluate).unwrap();
+    assert!(order[..first_observed]
+        .iter()
+        .all(|s| *s == Status::OverLimit));
+    let observed: Vec<&str> = evaluation
+        .findings
+        .iter()
+        .filter(|f| f.status == Status::ToEvaluate)
+        .map(|f| f.rule_id())
+        .collect();
+    assert_eq!(observed, ["sawn-cut", "wood-damage"]);
+    let family_bearing = evaluation
+        .findings
+        .iter()
+        .find(|f| f.rule_id() == "bearing-length" && f.place.location.contains("Family room"))
+        .unwrap();
+    assert_eq!(family_bearing.status, Status::OverLimit);
+    assert!(
+        family_bearing.summary().contains("only 1\" of it is sound"),
+        "{}",
+        family_bearing.summary()
+    );
+    let family_span = evaluation
+        .findings
+        .iter()
+        .find(|f| f.rule_id() == "joist-span" && f.place.location.contains("Family room"))
+        .unwrap();
+    assert!(
+        family_span
+            .assumptions()
+            .iter()
+            .any(|a| a.starts_with("Live load 40 psf")),
+        "{:?}",
+        family_span.assumptions()
+    );
+    // A rough-sawn 2x14 at 24 in is outside the printed tables: an engineering reference.
+    assert_eq!(family_span.basis, Basis::Reference);
 }

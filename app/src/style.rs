@@ -25,7 +25,7 @@ ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(-
 .muted { color: var(--muted); font-size: 15px; }
 .card { border: 2px solid var(--line); border-radius: 10px; padding: 10px 12px; margin: 12px 0; }
 .status { font-weight: 700; }
-.status-over-limit { color: var(--over); } .status-near-limit { color: var(--near); } .status-within { color: var(--ok); }
+.status-over-limit, .status-to-evaluate { color: var(--over); } .status-near-limit, .status-incomplete { color: var(--near); } .status-within { color: var(--ok); }
 .notice { font-size: 13px; padding: 4px 14px; color: var(--muted); border-bottom: 1px solid var(--line); }
 nav.back { margin: 4px 0; }
 figure.side-view { margin: 8px 0; }

@@ -61,8 +61,13 @@ fn inspection_shows_areas_with_counts_over() {
         "{html}"
     );
     assert!(html.contains("Basement under the bedrooms"));
-    assert!(html.contains("12 over a limit"), "{html}");
-    assert!(html.contains("over a limit"));
+    // Code limits and engineering references over (16), and the demo's decay and cut joist
+    // as observed conditions to evaluate (2).
+    assert!(
+        html.contains("16 over a limit, 2 to be evaluated"),
+        "{html}"
+    );
+    assert!(html.contains("over a limit or to be evaluated"));
 }
 
 #[test]
@@ -100,18 +105,26 @@ fn run_shows_the_live_check() {
 fn findings_over_limit_first_with_citations() {
     let page = render(&format!("/inspection/{DEMO}/findings"));
     let html = &page[page.find("<main").expect("the screen")..];
-    let first_over = html.find("OVER LIMIT").expect("an over-limit finding");
-    let first_within = html.find("within").unwrap_or(usize::MAX);
+    let first_over = html.find("OVER CODE LIMIT").expect("an over-limit finding");
+    let first_within = html.find("within code limit").unwrap_or(usize::MAX);
     assert!(first_over < first_within, "over limit comes first");
+    let first_observed = html.find("TO BE EVALUATED").expect("decay to evaluate");
+    let first_within_badge = html.find("within code limit").unwrap_or(usize::MAX);
+    assert!(
+        first_observed < first_within_badge,
+        "observed conditions before within"
+    );
+    assert!(html.contains("Basis: observed condition"));
     assert!(html.contains("IRC 2018 R502.8.1"));
     assert!(html.contains("licensed professional"));
 }
 
-// Source: IRC 2018 R502.8.1: the demo's 2 in notch in a 2x10 (limit d/6 = 1-9/16 in).
+// Source: IRC 2018 R502.8.1: the demo's 2 in notch in a 2x10 (limit d/6 = 1.542 in, held as
+// shown: 1-1/2 in).
 #[test]
 fn observation_shows_verdict_citation_and_side_view() {
     let html = render("/observe/joist-k7/notch/obs-k7-notch");
-    assert!(html.contains("OVER LIMIT 130 %"), "{html}");
+    assert!(html.contains("OVER CODE LIMIT 133 %"), "{html}");
     assert!(html.contains("IRC 2018 R502.8.1"));
     assert!(html.contains("<svg"), "the side view is drawn");
     assert!(html.contains("middle third"));

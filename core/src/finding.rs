@@ -4,7 +4,7 @@
 //! when it is read (`summary`, `assumptions`, `recommendation`), so evaluating stays cheap.
 
 use crate::rules::Detail;
-use crate::units::{format_dimension, format_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, round_down, round_up, Length, UnitSystem};
 use crate::validate::MemberContext;
 use serde::ser::SerializeStruct;
 use serde::Serialize;
@@ -18,28 +18,77 @@ pub type Text = Cow<'static, str>;
 pub const NEAR_LIMIT_RATIO: f64 = 0.9;
 /// Measurements equal to a limit within this relative tolerance count as at the limit.
 const RATIO_TOLERANCE: f64 = 1e-9;
+/// Source: NIST SP 811 Appendix B (1 lbf = 4.448 222 N).
+const NEWTONS_PER_POUND: f64 = 4.448_222;
 /// Lengths shorter than this are shown in inches only (`14"`), longer ones in feet-inches.
 const SHORT_LENGTH_INCHES: f64 = 24.0;
+
+/// What a finding's limit rests on: the code, a computed engineering reference that is not a
+/// code requirement, or what the inspector saw.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Hash, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Basis {
+    /// A prescriptive limit of the residential code (notch, hole, bearing, bridging, a span
+    /// within the printed tables).
+    CodeLimit,
+    /// A computed engineering reference (NDS mechanics outside the printed tables, measured
+    /// sag against L/360, moisture against 19 %): a screening reference, not a requirement.
+    Reference,
+    /// A condition seen (decay, insects, a cut) that has no numeric limit to hold it to.
+    Observed,
+}
+
+impl Basis {
+    pub fn name(self) -> &'static str {
+        match self {
+            Basis::CodeLimit => "code limit",
+            Basis::Reference => "engineering reference",
+            Basis::Observed => "observed condition",
+        }
+    }
+}
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Hash, Serialize)]
 #[serde(rename_all = "kebab-case")]
 pub enum Status {
     /// Exceeds the limit.
     OverLimit,
+    /// An observed condition (damage, a cut) for a professional to evaluate.
+    ToEvaluate,
     /// At 90 % of the limit or more, but not over it.
     NearLimit,
+    /// Some limits were checked and met, but at least one could not be checked: never reads
+    /// as within.
+    Incomplete,
     Within,
     /// Could not be checked; the finding says why.
     NotChecked,
 }
 
 impl Status {
+    /// The status alone, without its basis (see `Finding::status_label`).
     pub fn label(self) -> &'static str {
         match self {
             Status::OverLimit => "OVER LIMIT",
+            Status::ToEvaluate => "TO BE EVALUATED",
             Status::NearLimit => "near limit",
+            Status::Incomplete => "not fully checked",
             Status::Within => "within",
             Status::NotChecked => "not checked",
+        }
+    }
+
+    /// The status as said of a finding on the given basis: "over the code limit" only of a
+    /// code limit.
+    pub fn label_on(self, basis: Basis) -> &'static str {
+        match (self, basis) {
+            (Status::OverLimit, Basis::CodeLimit) => "OVER CODE LIMIT",
+            (Status::OverLimit, _) => "BEYOND REFERENCE",
+            (Status::NearLimit, Basis::CodeLimit) => "near code limit",
+            (Status::NearLimit, _) => "near reference",
+            (Status::Within, Basis::CodeLimit) => "within code limit",
+            (Status::Within, _) => "within reference",
+            (other, _) => other.label(),
         }
     }
 
@@ -68,6 +117,8 @@ pub fn length_text(length: Length, units: UnitSystem) -> String {
 #[derive(Debug, Clone, PartialEq)]
 pub enum Value {
     Length(Length),
+    /// A force in pounds (shown in kN in metric).
+    Pounds(f64),
     Percent(f64),
     Count(u32),
     Text(Text),
@@ -77,6 +128,10 @@ impl Value {
     pub fn text(&self, units: UnitSystem) -> String {
         match self {
             Value::Length(l) => length_text(*l, units),
+            Value::Pounds(lb) => match units {
+                UnitSystem::Imperial => format!("{lb:.0} lb"),
+                UnitSystem::Metric => format!("{:.2} kN", lb * NEWTONS_PER_POUND / 1000.0),
+            },
             Value::Percent(p) => format!("{p:.1} %"),
             Value::Count(n) => n.to_string(),
             Value::Text(t) => t.to_string(),
@@ -86,6 +141,7 @@ impl Value {
     pub fn number(&self) -> Option<f64> {
         match self {
             Value::Length(l) => Some(l.in_inches()),
+            Value::Pounds(lb) => Some(*lb),
             Value::Percent(p) => Some(*p),
             Value::Count(n) => Some(*n as f64),
             Value::Text(_) => None,
@@ -95,6 +151,7 @@ impl Value {
     pub fn unit(&self) -> Option<&'static str> {
         match self {
             Value::Length(_) => Some("in"),
+            Value::Pounds(_) => Some("lb"),
             Value::Percent(_) => Some("%"),
             Value::Count(_) => Some("count"),
             Value::Text(_) => None,
@@ -146,6 +203,8 @@ pub struct Check {
 
 impl Check {
     /// A numeric criterion. A zero measurement against a minimum is over with no ratio.
+    /// A length limit is held as it is shown: a maximum rounded down and a minimum rounded
+    /// up to the display grid (1/16 in or 1 mm), so a value equal to the shown limit passes.
     pub fn numeric(
         what: impl Into<Text>,
         measured: Value,
@@ -153,6 +212,11 @@ impl Check {
         bound: Bound,
         units: UnitSystem,
     ) -> Check {
+        let limit = match (limit, bound) {
+            (Value::Length(l), Bound::AtMost) => Value::Length(round_down(l, units)),
+            (Value::Length(l), Bound::AtLeast) => Value::Length(round_up(l, units)),
+            (other, _) => other,
+        };
         let ratio = match (measured.number(), limit.number(), bound) {
             (Some(m), Some(l), Bound::AtMost) if l > 0.0 => Some(m / l),
             (Some(m), Some(l), Bound::AtLeast) if m > 0.0 => Some(l / m),
@@ -249,6 +313,9 @@ pub struct RuleInfo {
     pub code_section: Option<&'static str>,
     /// Other published source (NDS), written as is.
     pub other_source: Option<&'static str>,
+    /// What the rule's limit rests on, unless a finding says otherwise (a span outside the
+    /// printed tables is an engineering reference).
+    pub basis: Basis,
 }
 
 impl RuleInfo {
@@ -291,6 +358,7 @@ pub trait Wording {
 #[derive(Debug, Clone, PartialEq)]
 pub struct Finding {
     pub rule: &'static RuleInfo,
+    pub basis: Basis,
     pub status: Status,
     pub place: Place,
     pub observation_id: Option<Arc<str>>,
@@ -301,6 +369,30 @@ pub struct Finding {
     pub detail: Detail,
     pub units: UnitSystem,
     pub edition: Arc<str>,
+    /// The year the house was built, where known.
+    pub year_built: Option<u16>,
+}
+
+/// The year of a code edition named like "IRC 2018".
+pub fn edition_year(edition: &str) -> Option<u16> {
+    edition
+        .split(|c: char| !c.is_ascii_digit())
+        .find(|w| w.len() == 4)
+        .and_then(|w| w.parse().ok())
+}
+
+/// How the chosen edition stands to an existing house: a benchmark of current practice, not
+/// a code it had to meet. None for a house built in the edition's year or later.
+pub fn benchmark_note(edition: &str, year_built: Option<u16>) -> Option<String> {
+    match (year_built, edition_year(edition)) {
+        (Some(built), Some(year)) if built >= year => None,
+        (Some(built), _) => Some(format!(
+            "The house was built in {built}: the {edition} is used as a benchmark of current practice, not as a code the house had to meet when it was built"
+        )),
+        (None, _) => Some(format!(
+            "The {edition} is used as a benchmark of current practice; an existing house is held to the code in force when it was built, which may differ"
+        )),
+    }
 }
 
 impl Finding {
@@ -318,6 +410,10 @@ impl Finding {
     }
     pub fn title(&self) -> &'static str {
         self.rule.title
+    }
+    /// The status as the client reads it, on this finding's basis.
+    pub fn status_label(&self) -> &'static str {
+        self.status.label_on(self.basis)
     }
     pub fn governing_check(&self) -> Option<&Check> {
         self.governing.map(|i| &self.checks[i])
@@ -345,9 +441,19 @@ impl Finding {
         }
     }
     pub fn assumptions(&self) -> Vec<String> {
-        self.detail.wording().assumptions(self.units)
+        let mut out = self.detail.wording().assumptions(self.units);
+        if self.basis == Basis::CodeLimit {
+            out.extend(benchmark_note(&self.edition, self.year_built));
+        }
+        out
     }
     pub fn recommendation(&self) -> String {
+        if self.status == Status::Incomplete {
+            return format!(
+                "Not every limit was checked ({}): measure and enter what is missing before relying on this finding.",
+                self.not_checked_because.as_deref().unwrap_or("a limit was not checked")
+            );
+        }
         self.detail
             .wording()
             .recommendation(self.status, self.units)
@@ -362,7 +468,9 @@ impl Serialize for Finding {
         let mut st = s.serialize_struct("Finding", 20)?;
         st.serialize_field("rule_id", self.rule.id)?;
         st.serialize_field("title", self.rule.title)?;
+        st.serialize_field("basis", &self.basis)?;
         st.serialize_field("status", &self.status)?;
+        st.serialize_field("status_label", self.status_label())?;
         st.serialize_field("area_id", &self.place.area_id)?;
         st.serialize_field("member_id", &self.place.member_id)?;
         st.serialize_field("location", &self.place.location)?;
@@ -408,6 +516,7 @@ impl FindingBuilder {
         FindingBuilder {
             finding: Finding {
                 rule,
+                basis: rule.basis,
                 status: Status::NotChecked,
                 place: ctx.place.clone(),
                 observation_id: observation_id.cloned(),
@@ -417,6 +526,7 @@ impl FindingBuilder {
                 detail: Detail::Missing("Enter the missing measurements."),
                 units: ctx.units,
                 edition: ctx.edition.clone(),
+                year_built: ctx.year_built,
             },
         }
     }
@@ -424,6 +534,20 @@ impl FindingBuilder {
     pub fn check(mut self, check: Check) -> Self {
         self.finding.checks.push(check);
         self
+    }
+
+    /// Sets the basis where it differs from the rule's.
+    pub fn basis(mut self, basis: Basis) -> Self {
+        self.finding.basis = basis;
+        self
+    }
+
+    /// An observed condition with no numeric limit: reaches the summary to be evaluated.
+    pub fn observed(mut self, detail: Detail) -> Finding {
+        self.finding.basis = Basis::Observed;
+        self.finding.status = Status::ToEvaluate;
+        self.finding.detail = detail;
+        self.finding
     }
 
     /// Sets the status and the governing criterion from the checks, and the detail the
@@ -446,6 +570,20 @@ impl FindingBuilder {
             Some((i, status)) => {
                 f.governing = Some(i);
                 f.status = status;
+                // A finding whose checks were not all made never reads as within or near.
+                let skipped: Vec<String> = f
+                    .checks
+                    .iter()
+                    .filter(|c| c.status == Status::NotChecked)
+                    .map(|c| match &c.not_checked_because {
+                        Some(why) => format!("{} not checked: {why}", c.what),
+                        None => format!("{} not checked", c.what),
+                    })
+                    .collect();
+                if !skipped.is_empty() && matches!(status, Status::Within | Status::NearLimit) {
+                    f.status = Status::Incomplete;
+                    f.not_checked_because = Some(skipped.join("; ").into());
+                }
             }
             None => {
                 f.status = Status::NotChecked;
@@ -518,12 +656,27 @@ mod tests {
     }
 
     #[test]
+    fn an_older_house_is_held_to_a_benchmark() {
+        let note = benchmark_note("IRC 2018", Some(1948)).unwrap();
+        assert!(
+            note.contains("built in 1948") && note.contains("benchmark"),
+            "{note}"
+        );
+        assert_eq!(benchmark_note("IRC 2018", Some(2019)), None);
+        assert!(benchmark_note("IRC 2021", None)
+            .unwrap()
+            .contains("benchmark"));
+        assert_eq!(edition_year("IRC 2021"), Some(2021));
+    }
+
+    #[test]
     fn citation_carries_the_edition() {
         let rule = RuleInfo {
             id: "x",
             title: "X",
             code_section: Some("R502.8.1"),
             other_source: Some("NDS 2018 3.3"),
+            basis: Basis::CodeLimit,
         };
         assert_eq!(rule.citation("IRC 2021"), "IRC 2021 R502.8.1; NDS 2018 3.3");
     }

@@ -44,6 +44,7 @@ pub fn inspection_with_members(members: usize) -> Inspection {
                     kind: BridgingKind::SolidBlocking,
                     interval: Some(Length::inches(60.0 + (n % 60) as f64)),
                 }),
+                loads: Default::default(),
             };
             made += 1;
             let joists = (0..9.min(members - made))

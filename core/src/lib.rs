@@ -19,7 +19,7 @@ pub mod units;
 pub mod validate;
 
 pub use engine::{evaluate, Evaluation};
-pub use finding::{Finding, Status};
+pub use finding::{Basis, Finding, Status};
 pub use model::Inspection;
 
 /// The caution every output carries.

@@ -4,7 +4,9 @@
 use crate::finding::Place;
 use crate::lumber::{GradeChoice, LoadDuration, Section, Species};
 use crate::mechanics::{allowable_span, SpanInput, SpanResult};
-use crate::model::{Framing, Inspection, MemberKind, Observation, ObservationKind, ResolvedLoads};
+use crate::model::{
+    Framing, Inspection, LoadSettings, MemberKind, Observation, ObservationKind, ResolvedLoads,
+};
 use crate::units::{Length, UnitSystem};
 use serde::Serialize;
 use std::sync::Arc;
@@ -13,6 +15,64 @@ use std::sync::Arc;
 /// Source: NDS (2018) Supplement Table 4A adjustment factors (wet service: moisture content
 /// over 19 % for an extended period).
 pub const WET_SERVICE_MC_PERCENT: f64 = 19.0;
+
+/// The on-centre layouts of the printed span tables.
+/// Source: IRC 2018 Tables R502.3.1(1) and R502.3.1(2), columns 12, 16, 19.2 and 24 in.
+pub const STANDARD_LAYOUTS: [f64; 4] = [12.0, 16.0, 19.2, 24.0];
+/// A taped spacing within this of a standard layout is that layout, framed with the usual
+/// scatter of a tape and a crown. Common practice, no source.
+const LAYOUT_TOLERANCE_IN: f64 = 0.75;
+/// An end notch is one over or at the bearing: its near side within this of the support
+/// face (a tape's reading at a bearing). Common practice, no source.
+const END_NOTCH_TOLERANCE_IN: f64 = 0.5;
+
+/// The standard layout a taped spacing stands for, if it is within framing tolerance of one.
+pub fn layout_of(taped: Length) -> Option<f64> {
+    STANDARD_LAYOUTS
+        .into_iter()
+        .find(|l| (taped.in_inches() - l).abs() <= LAYOUT_TOLERANCE_IN)
+}
+
+/// Why an observation cannot be what the inspector meant, given the member's clear span:
+/// a position beyond the span, or a notch "at the end" that is entered away from it.
+/// Forms refuse it; in files it is an input problem and the observation is not used.
+pub fn observation_problem(kind: &ObservationKind, span: Option<Length>) -> Option<String> {
+    let fmt = |l: Length| crate::units::format_length(l, crate::units::UnitSystem::Imperial);
+    let beyond = |what: &str, at: Length| -> Option<String> {
+        let span = span?;
+        (at.in_inches() > span.in_inches() + 1e-9).then(|| {
+            format!(
+                "{what} {} from the support is beyond the clear span of {}; check the entry",
+                fmt(at),
+                fmt(span)
+            )
+        })
+    };
+    match kind {
+        ObservationKind::Notch {
+            at_end,
+            from_support: Some(from),
+            length,
+            ..
+        } => {
+            if *at_end && from.in_inches() > END_NOTCH_TOLERANCE_IN {
+                return Some(format!(
+                    "a notch marked at the end is entered {} from the support: an end notch is over or at the bearing, so either the distance or \"at the end\" is wrong",
+                    fmt(*from)
+                ));
+            }
+            beyond("the far side of the notch", *from + *length)
+        }
+        ObservationKind::Hole { from_support, .. } => beyond("the hole", *from_support),
+        ObservationKind::Sag { readings, .. } => {
+            readings.iter().find_map(|r| beyond("a sag reading", r.at))
+        }
+        ObservationKind::Damage {
+            reach: Some(reach), ..
+        } => beyond("the damage reaching", *reach),
+        _ => None,
+    }
+}
 
 /// Something entered that could not be used as it is.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -55,6 +115,12 @@ pub struct MemberContext<'a> {
     pub report_span: bool,
     /// Why the lumber is not known (for "not checked" findings).
     pub lumber_missing: Vec<&'static str>,
+    /// The spacing as taped, where it was held to the standard layout in `framing.spacing`.
+    pub spacing_taped: Option<Length>,
+    /// True when the moisture is its run's reading, the joist having none of its own.
+    pub moisture_from_run: bool,
+    /// The year the house was built, where known (the code edition is then a benchmark).
+    pub year_built: Option<u16>,
 }
 
 impl MemberContext<'_> {
@@ -93,12 +159,12 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
                 message,
             });
         }
-        let loads = area_loads.resolve(&top_loads);
         let base = Shared {
             inspection,
             area_id: Arc::from(area.id.as_str()),
             edition: edition.clone(),
-            loads,
+            area_loads,
+            top_loads,
         };
         for run in &area.runs {
             let where_run = format!("{} > {}", area.name, run.label);
@@ -107,10 +173,11 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
                 where_run.clone(),
                 &run.framing,
                 &run.observations,
-                true,
+                Role::OWN,
                 &mut problems,
             );
             let run_wet = typical.is_wet();
+            let run_moisture = typical.moisture_percent;
             out.push(typical);
             for joist in &run.joists {
                 let framing = joist.framing.over(&run.framing);
@@ -120,7 +187,10 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
                     format!("{where_run} > {}", joist.label),
                     &framing,
                     &joist.observations,
-                    own,
+                    Role {
+                        report_framing: own,
+                        run_moisture,
+                    },
                     &mut problems,
                 );
                 ctx.report_span = own || ctx.is_wet() != run_wet;
@@ -134,7 +204,7 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
                 location,
                 &member.framing,
                 &member.observations,
-                true,
+                Role::OWN,
                 &mut problems,
             ));
         }
@@ -142,11 +212,28 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
     (out, problems)
 }
 
+/// What a member is to the report: whether its member-wide checks are its own, and the
+/// moisture reading of its run, which a joist with no reading of its own takes.
+#[derive(Clone, Copy)]
+struct Role {
+    report_framing: bool,
+    run_moisture: Option<f64>,
+}
+
+impl Role {
+    /// A run's typical joist or a single member.
+    const OWN: Role = Role {
+        report_framing: true,
+        run_moisture: None,
+    };
+}
+
 struct Shared<'a> {
     inspection: &'a Inspection,
     area_id: Arc<str>,
     edition: Arc<str>,
-    loads: ResolvedLoads,
+    area_loads: LoadSettings,
+    top_loads: LoadSettings,
 }
 
 impl<'a> Shared<'a> {
@@ -156,7 +243,7 @@ impl<'a> Shared<'a> {
         location: String,
         framing: &Framing,
         observations: &'a [Observation],
-        report_framing: bool,
+        role: Role,
         problems: &mut Vec<Problem>,
     ) -> MemberContext<'a> {
         let mut problem = |message: String| {
@@ -165,6 +252,11 @@ impl<'a> Shared<'a> {
                 message,
             })
         };
+        let (own_loads, notes) = framing.loads.usable();
+        for message in notes {
+            problem(format!("loads: {message}"));
+        }
+        let loads: ResolvedLoads = own_loads.over(&self.area_loads).resolve(&self.top_loads);
         let kind = framing.kind.unwrap_or_default();
         let mut lumber_missing = Vec::new();
         if framing.species.is_none() {
@@ -216,7 +308,17 @@ impl<'a> Shared<'a> {
             }
         }
         let mut moisture_percent: Option<f64> = None;
-        for o in observations {
+        let observations: Vec<&'a Observation> = observations
+            .iter()
+            .filter(|o| match observation_problem(&o.kind, framing.clear_span) {
+                Some(message) => {
+                    problem(format!("{}: {message}; not used", o.kind.name()));
+                    false
+                }
+                None => true,
+            })
+            .collect();
+        for o in &observations {
             if let ObservationKind::Moisture { percent, .. } = o.kind {
                 if percent.is_finite() && (0.0..=100.0).contains(&percent) {
                     moisture_percent = Some(moisture_percent.map_or(percent, |m| m.max(percent)));
@@ -227,9 +329,18 @@ impl<'a> Shared<'a> {
                 }
             }
         }
-        let spacing = framing
+        // A joist with no reading of its own is as wet as its run's reading says.
+        let moisture_from_run = moisture_percent.is_none() && role.run_moisture.is_some();
+        if moisture_from_run {
+            moisture_percent = role.run_moisture;
+        }
+        let taped = framing
             .spacing
             .filter(|s| (4.0..=48.0).contains(&s.in_inches()));
+        let layout = taped.and_then(layout_of).map(Length::inches);
+        let spacing = layout.or(taped);
+        let spacing_taped =
+            taped.filter(|t| layout.is_some_and(|l| (*t - l).in_inches().abs() > 1e-9));
         let wet = moisture_percent.is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT);
         let span = match (&lumber, spacing) {
             (Some(l), Some(spacing)) => allowable_span(&SpanInput {
@@ -237,9 +348,9 @@ impl<'a> Shared<'a> {
                 grade: l.grade.grade_for_design(),
                 section: l.section,
                 spacing,
-                live: self.loads.live,
-                dead: self.loads.dead,
-                deflection_denominator: self.loads.deflection_denominator,
+                live: loads.live,
+                dead: loads.dead,
+                deflection_denominator: loads.deflection_denominator,
                 wet_service: wet,
                 duration: LoadDuration::TenYears,
                 repetitive: true,
@@ -260,13 +371,20 @@ impl<'a> Shared<'a> {
             kind,
             lumber,
             section,
-            loads: self.loads,
-            observations: observations.iter().collect(),
+            loads,
+            observations,
             moisture_percent,
             span,
-            report_framing,
-            report_span: report_framing,
+            report_framing: role.report_framing,
+            report_span: role.report_framing,
             lumber_missing,
+            spacing_taped,
+            moisture_from_run,
+            year_built: self.inspection.property.year_built,
         }
     }
 }
+
+#[cfg(test)]
+#[path = "validate_tests.rs"]
+mod tests;

@@ -236,10 +236,10 @@ fn check_json_lists_findings_with_citations() {
     let findings = v["findings"].as_array().unwrap();
     assert!(findings.len() > 30);
     for f in findings {
-        for key in ["rule_id", "status", "citation"] {
+        for key in ["rule_id", "basis", "status", "status_label", "citation"] {
             assert!(f.get(key).is_some(), "{key} missing in {f}");
         }
-        if f["status"] != "not-checked" {
+        if f["status"] != "not-checked" && f["status"] != "to-evaluate" {
             assert!(
                 f.get("measured").is_some() && f.get("limit").is_some(),
                 "{f}"
@@ -252,8 +252,36 @@ fn check_json_lists_findings_with_citations() {
         .unwrap();
     assert_eq!(notch["status"], "over-limit");
     assert_eq!(notch["citation"], "IRC 2018 R502.8.1");
+    assert_eq!(notch["status_label"], "OVER CODE LIMIT");
     assert_eq!(notch["measured"]["value"], 2.0);
-    assert!((notch["ratio"].as_f64().unwrap() - 2.0 / (9.25 / 6.0)).abs() < 1e-9);
+    // Source: IRC 2018 R502.8.1, d/6 of a 9-1/4 in 2x10 = 1.542 in, held as shown: 1-1/2 in.
+    assert_eq!(notch["limit"]["text"], "1-1/2\"");
+    assert!((notch["ratio"].as_f64().unwrap() - 2.0 / 1.5).abs() < 1e-9);
+    let counts = &v["counts"];
+    assert!(counts["code_over"].as_u64().unwrap() > 0, "{counts}");
+    assert_eq!(counts["observed_to_evaluate"], 2, "{counts}");
+    assert!(v["benchmark"].as_str().unwrap().contains("built in 1948"));
+}
+
+#[test]
+fn typed_fractions_of_one_or_more_are_refused_with_a_suggestion() {
+    let o = undercroft(&[
+        "span",
+        "--species",
+        "spf",
+        "--grade",
+        "no2",
+        "--size",
+        "2x10",
+        "--spacing",
+        "11/2",
+    ]);
+    assert!(!o.status.success());
+    assert!(
+        stderr(&o).contains("did you mean 1-1/2\""),
+        "{}",
+        stderr(&o)
+    );
 }
 
 #[test]
@@ -261,7 +289,9 @@ fn check_text_puts_over_limit_first() {
     let o = undercroft(&["check", &demo()]);
     let text = stdout(&o);
     let first = text.lines().find(|l| l.starts_with('[')).unwrap();
-    assert!(first.starts_with("[OVER LIMIT"), "{first}");
+    assert!(first.starts_with("[OVER CODE LIMIT"), "{first}");
+    assert!(text.contains("[TO BE EVALUATED] wood-damage"), "{text}");
+    assert!(text.contains("benchmark of current practice"), "{text}");
     assert!(text.contains("Screening tool"), "{text}");
 }
 

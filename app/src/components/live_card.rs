@@ -12,7 +12,7 @@ pub fn LiveCard(check: LiveCheck) -> Element {
         .unwrap_or_default();
     rsx! {
         div { class: "card", id: "live-check",
-            StatusBadge { status: check.status, use_text: check.use_text.clone() }
+            StatusBadge { status: check.status, label: check.status.label().to_string(), use_text: check.use_text.clone() }
             p { "{check.message}" }
             if let Some(allowable) = &check.allowable {
                 p { class: "muted", "Allowable span {allowable}; {governing} governs" }

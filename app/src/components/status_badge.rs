@@ -1,10 +1,11 @@
-//! A finding's status in words (never colour alone), with its use of the limit.
+//! A finding's status in words (never colour alone, and in the words of its basis: "over
+//! code limit" only for a code limit), with its use of the limit.
 
 use dioxus::prelude::*;
 use undercroft_core::Status;
 
 #[component]
-pub fn StatusBadge(status: Status, use_text: Option<String>) -> Element {
+pub fn StatusBadge(status: Status, label: String, use_text: Option<String>) -> Element {
     let class = format!(
         "status status-{}",
         serde_json::to_value(status)
@@ -13,8 +14,15 @@ pub fn StatusBadge(status: Status, use_text: Option<String>) -> Element {
             .unwrap_or_default()
     );
     let text = match use_text {
-        Some(u) => format!("{} {u}", status.label()),
-        None => status.label().to_string(),
+        Some(u)
+            if matches!(
+                status,
+                Status::OverLimit | Status::NearLimit | Status::Within
+            ) =>
+        {
+            format!("{label} {u}")
+        }
+        _ => label,
     };
     rsx! { span { class: "{class}", "{text}" } }
 }

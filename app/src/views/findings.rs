@@ -12,6 +12,8 @@ use undercroft_core::store::FindingNote;
 struct Row {
     key: String,
     status: undercroft_core::Status,
+    label: String,
+    basis: String,
     use_text: Option<String>,
     title: String,
     summary: String,
@@ -49,17 +51,22 @@ pub fn Findings(id: String) -> Element {
                     key: key.clone(),
                     ..Default::default()
                 });
-            let measured = match (f.measured(), f.limit()) {
-                (Some(m), Some(l)) => format!("Measured {}, limit {}", m.text, l.text),
-                _ => f
-                    .not_checked_because
-                    .as_deref()
-                    .map(|w| format!("Not checked: {w}"))
-                    .unwrap_or_default(),
+            let not_checked = f
+                .not_checked_because
+                .as_deref()
+                .map(|w| format!("Not checked: {w}"));
+            let measured = match (f.measured(), f.limit(), not_checked) {
+                (Some(m), Some(l), None) => format!("Measured {}, limit {}", m.text, l.text),
+                (Some(m), Some(l), Some(why)) => {
+                    format!("Measured {}, limit {}. {why}", m.text, l.text)
+                }
+                (_, _, why) => why.unwrap_or_default(),
             };
             Row {
                 key,
                 status: f.status,
+                label: f.status_label().to_string(),
+                basis: f.basis.name().to_string(),
                 use_text: f.use_text(),
                 title: f.title().to_string(),
                 summary: f.summary(),
@@ -103,7 +110,7 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
     let set_aside = row.note.not_applicable_reason.clone();
     rsx! {
         div { class: "card finding",
-            StatusBadge { status: row.status, use_text: row.use_text.clone() }
+            StatusBadge { status: row.status, label: row.label.clone(), use_text: row.use_text.clone() }
             if let Some(reason) = &set_aside {
                 p { class: "status", "Set aside: {reason}" }
             }
@@ -111,7 +118,7 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
             p { class: "muted", "{row.location}" }
             p { "{row.summary}" }
             p { "{row.measured}" }
-            p { class: "muted", "Cites {row.citation}" }
+            p { class: "muted", "Basis: {row.basis}. Cites {row.citation}" }
             p { "{row.recommendation}" }
             if !row.note.note.is_empty() {
                 p { "Note: {row.note.note}" }

@@ -21,7 +21,10 @@ pub fn InspectionView(id: String) -> Element {
         evaluation
             .findings
             .iter()
-            .filter(|f| &*f.place.area_id == area_id && f.status == Status::OverLimit)
+            .filter(|f| {
+                &*f.place.area_id == area_id
+                    && matches!(f.status, Status::OverLimit | Status::ToEvaluate)
+            })
             .count()
     };
     let areas: Vec<(String, String, usize)> = inspection
@@ -57,6 +60,7 @@ pub fn InspectionView(id: String) -> Element {
         }
     };
     let total_over = evaluation.count(Status::OverLimit);
+    let to_evaluate = evaluation.count(Status::ToEvaluate);
     let archived = app.store.borrow().is_archived(&id).unwrap_or(false);
     let archive = {
         let app = app.clone();
@@ -72,7 +76,7 @@ pub fn InspectionView(id: String) -> Element {
             nav { class: "back", Link { to: Route::Inspections {}, "< Inspections" } }
             h1 { "{inspection.property.address}" }
             p { class: "muted", "{inspection.client.name} {inspection.date} {inspection.code_edition}" }
-            p { Link { to: Route::Findings { id: id.clone() }, id: "findings-link", "Findings: {total_over} over a limit" } }
+            p { Link { to: Route::Findings { id: id.clone() }, id: "findings-link", "Findings: {total_over} over a limit, {to_evaluate} to be evaluated" } }
             p { Link { to: Route::ReportView { id: id.clone() }, id: "report-link", "Report" } }
             h2 { "Areas" }
             ul { class: "list",
@@ -80,7 +84,7 @@ pub fn InspectionView(id: String) -> Element {
                     li { key: "{area_id}",
                         Link { to: Route::AreaView { id: area_id.clone() }, "{area_name}"
                             br {}
-                            span { class: "muted", "{over} over a limit" }
+                            span { class: "muted", "{over} over a limit or to be evaluated" }
                         }
                     }
                 }

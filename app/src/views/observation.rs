@@ -29,6 +29,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
     let exists = stored.is_some();
     let (owner_id, obs_id) = (owner.clone(), id.clone());
     let evaluation = app.evaluation(&inspection);
+    let span = inspection.clear_span_of(&owner);
     let save = use_callback(move |(field, value): (&'static str, String)| {
         form.with_mut(|f| {
             if field == "note" {
@@ -37,7 +38,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
                 f.values.insert(field.to_string(), value);
             }
         });
-        match form().to_observation(obs_id.clone().into(), units) {
+        match form().to_observation(obs_id.clone().into(), units, span) {
             Ok(observation) => {
                 errors.set(vec![]);
                 let result = if exists || app.store.borrow().inspection_of(&obs_id).is_ok() {
@@ -61,7 +62,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
         .find(|k| k.0 == f.kind)
         .map_or("Observation", |k| k.1);
     let verdict = f
-        .to_observation(id.clone().into(), units)
+        .to_observation(id.clone().into(), units, span)
         .ok()
         .map(|o| preview_observation(&inspection, &owner, &o))
         .unwrap_or_default();
@@ -89,7 +90,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
             h1 { "{title}" }
             for finding in verdict.iter() {
                 div { class: "card", id: "verdict",
-                    StatusBadge { status: finding.status, use_text: finding.use_text() }
+                    StatusBadge { status: finding.status, label: finding.status_label().to_string(), use_text: finding.use_text() }
                     p { "{finding.summary()}" }
                     p { class: "muted", "Cites {finding.citation()}" }
                 }

@@ -4,6 +4,7 @@
 use super::FieldError;
 use crate::model::{Observation, ObservationKind};
 use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
+use crate::validate::observation_problem;
 use serde_json::{Map, Value};
 use std::collections::BTreeMap;
 use std::sync::Arc;
@@ -143,10 +144,21 @@ const MOISTURE_FIELDS: &[FieldSpec] = &[
     field("percent", "Moisture content, %", FieldType::Percent, true),
     field("location", "Where", FieldType::Text, false),
 ];
+const DAMAGE_AT: &[(&str, &str)] = &[
+    ("a", "At end A, over the bearing"),
+    ("b", "At end B, over the bearing"),
+];
 const DAMAGE_FIELDS: &[FieldSpec] = &[
     field("cause", "Cause", FieldType::Choice(CAUSES), true),
     field("severity", "How bad (your words)", FieldType::Text, false),
     field("extent", "Extent", FieldType::Text, false),
+    field("at_end", "Where", FieldType::Choice(DAMAGE_AT), false),
+    field(
+        "reach",
+        "How far it reaches in from that end",
+        FieldType::Short,
+        false,
+    ),
 ];
 const LAP_FIELDS: &[FieldSpec] = &[
     field("length", "Lap length", FieldType::Short, false),
@@ -253,11 +265,14 @@ impl ObservationForm {
         }
     }
 
-    /// The model's observation, or every field's problem.
+    /// The model's observation, or every field's problem. `clear_span` is the member's, when
+    /// known: a position beyond it, or a notch "at the end" entered away from the end, is
+    /// refused under the field that holds it (the rule of `validate::observation_problem`).
     pub fn to_observation(
         &self,
         id: Arc<str>,
         units: UnitSystem,
+        clear_span: Option<Length>,
     ) -> Result<Observation, Vec<FieldError>> {
         let specs = fields_of(&self.kind);
         if specs.is_empty() {
@@ -346,6 +361,14 @@ impl ObservationForm {
                 message: e.to_string(),
             }]
         })?;
+        if let Some(message) = observation_problem(&kind, clear_span) {
+            let field = match &kind {
+                ObservationKind::Sag { .. } => "readings",
+                ObservationKind::Damage { .. } => "reach",
+                _ => "from_support",
+            };
+            return Err(vec![FieldError { field, message }]);
+        }
         Ok(Observation {
             id,
             kind,
@@ -402,7 +425,9 @@ mod tests {
                 ("from_support", "3"),
             ],
         );
-        let o = f.to_observation("n1".into(), UnitSystem::Imperial).unwrap();
+        let o = f
+            .to_observation("n1".into(), UnitSystem::Imperial, None)
+            .unwrap();
         let ObservationKind::Notch {
             depth,
             length,
@@ -432,7 +457,7 @@ mod tests {
         );
         assert_eq!(back.value("from_support"), "3' 0\"");
         assert_eq!(
-            back.to_observation("n1".into(), UnitSystem::Imperial)
+            back.to_observation("n1".into(), UnitSystem::Imperial, None)
                 .unwrap()
                 .kind,
             o.kind
@@ -450,7 +475,7 @@ mod tests {
             let f = ObservationForm::from_observation(o, UnitSystem::Imperial);
             kinds.insert(f.kind.clone());
             assert_eq!(
-                f.to_observation(o.id.clone(), UnitSystem::Imperial)
+                f.to_observation(o.id.clone(), UnitSystem::Imperial, None)
                     .as_ref(),
                 Ok(o),
                 "{}",
@@ -464,22 +489,82 @@ mod tests {
         );
     }
 
+    // A notch typed 25' 0" out on a 15 ft joist, and a notch "at the end" entered 4 ft out,
+    // are refused under the distance field (the same rule as inspection files).
+    #[test]
+    fn positions_are_held_to_the_span() {
+        let span = Some(Length::feet(15.0));
+        let far = form(
+            "notch",
+            &[
+                ("edge", "bottom"),
+                ("depth", "1\""),
+                ("length", "2\""),
+                ("from_support", "25' 0\""),
+            ],
+        );
+        let e = far
+            .to_observation("n".into(), UnitSystem::Imperial, span)
+            .unwrap_err();
+        assert_eq!(e[0].field, "from_support");
+        assert!(
+            e[0].message.contains("beyond the clear span"),
+            "{}",
+            e[0].message
+        );
+        assert!(far
+            .to_observation("n".into(), UnitSystem::Imperial, Some(Length::feet(30.0)))
+            .is_ok());
+        let contradiction = form(
+            "notch",
+            &[
+                ("edge", "bottom"),
+                ("depth", "1\""),
+                ("length", "2\""),
+                ("at_end", "true"),
+                ("from_support", "4'"),
+            ],
+        );
+        let e = contradiction
+            .to_observation("n".into(), UnitSystem::Imperial, span)
+            .unwrap_err();
+        assert!(e[0].message.contains("at the end"), "{}", e[0].message);
+        let hole = form(
+            "hole",
+            &[
+                ("diameter", "1\""),
+                ("from_support", "16'"),
+                ("center_above_bottom", "4\""),
+            ],
+        );
+        assert!(hole
+            .to_observation("h".into(), UnitSystem::Imperial, span)
+            .is_err());
+        let sag = form("sag", &[("readings", "7' 6\", 1/2\"\n17', 0")]);
+        assert_eq!(
+            sag.to_observation("s".into(), UnitSystem::Imperial, span)
+                .unwrap_err()[0]
+                .field,
+            "readings"
+        );
+    }
+
     #[test]
     fn problems_name_their_fields() {
         let f = form("notch", &[("edge", "sideways"), ("depth", "13''7")]);
         let errors = f
-            .to_observation("n".into(), UnitSystem::Imperial)
+            .to_observation("n".into(), UnitSystem::Imperial, None)
             .unwrap_err();
         let fields: Vec<_> = errors.iter().map(|e| e.field).collect();
         assert_eq!(fields, ["edge", "depth", "length", "from_support"]);
         let sag = form("sag", &[("readings", "7' 7\", 5/8\"\nnonsense")]);
         let errors = sag
-            .to_observation("s".into(), UnitSystem::Imperial)
+            .to_observation("s".into(), UnitSystem::Imperial, None)
             .unwrap_err();
         assert!(errors[0].message.starts_with("line 2"), "{errors:?}");
         let wet = form("moisture", &[("percent", "250")]);
         assert_eq!(
-            wet.to_observation("m".into(), UnitSystem::Imperial)
+            wet.to_observation("m".into(), UnitSystem::Imperial, None)
                 .unwrap_err()[0]
                 .field,
             "percent"

@@ -97,7 +97,7 @@ mod tests {
             form.values.insert(k.into(), v.into());
         }
         let notch = form
-            .to_observation("new-notch".into(), UnitSystem::Imperial)
+            .to_observation("new-notch".into(), UnitSystem::Imperial, None)
             .unwrap();
         let findings = preview_observation(&demo, "run-dining", &notch);
         assert_eq!(findings.len(), 1);

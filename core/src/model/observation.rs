@@ -110,6 +110,13 @@ pub enum ObservationKind {
         severity: String,
         #[serde(default, skip_serializing_if = "String::is_empty")]
         extent: String,
+        /// The damage is at this end of the member, at or over its bearing.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        at_end: Option<End>,
+        /// How far the damage reaches in from that end of the member (the bearing it leaves
+        /// sound is the bearing length less this).
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        reach: Option<Length>,
     },
     /// Joists from opposite sides lapped over a support.
     Lap {

@@ -4,7 +4,7 @@
 use super::model::*;
 use super::side_view::side_view;
 use crate::engine::Evaluation;
-use crate::finding::{Finding, Status};
+use crate::finding::{benchmark_note, Basis, Finding, Status};
 use crate::lumber::{design_values, DesignValues};
 use crate::model::{Inspection, PhotoRef};
 use crate::store::FindingNote;
@@ -49,7 +49,7 @@ pub fn build_report(input: &ReportInput) -> Report {
             i.property.address, i.date
         ),
         cover: cover(i),
-        summary: summary(input.evaluation, &notes),
+        summary: summary(i, input.evaluation, &notes),
         areas,
         appendix: appendix(i, &contexts),
         limits: limits(i),
@@ -64,7 +64,20 @@ fn cover(i: &Inspection) -> Cover {
         ("License".into(), i.inspector.license.clone()),
         ("Date of inspection".into(), i.date.clone()),
         ("Conditions".into(), i.conditions.clone()),
-        ("Code edition".into(), i.code_edition.clone()),
+        (
+            "Code edition".into(),
+            match benchmark_note(&i.code_edition, i.property.year_built) {
+                Some(_) => format!(
+                    "{}, used as a benchmark of current practice{}",
+                    i.code_edition,
+                    i.property
+                        .year_built
+                        .map(|y| format!(" (the house was built in {y})"))
+                        .unwrap_or_default()
+                ),
+                None => i.code_edition.clone(),
+            },
+        ),
         (
             "Local amendments".into(),
             if i.local_amendments.is_empty() {
@@ -106,42 +119,123 @@ fn not_applicable<'n>(f: &Finding, notes: &HashMap<&str, &'n FindingNote>) -> Op
         .and_then(|n| n.not_applicable_reason.as_deref())
 }
 
-fn summary(evaluation: &Evaluation, notes: &HashMap<&str, &FindingNote>) -> Summary {
+/// The summary's groups, in order: what each holds and its title.
+const SUMMARY_GROUPS: [(Basis, Status, &str); 6] = [
+    (Basis::CodeLimit, Status::OverLimit, "Over a code limit"),
+    (
+        Basis::Observed,
+        Status::ToEvaluate,
+        "Observed conditions to be evaluated",
+    ),
+    (
+        Basis::Reference,
+        Status::OverLimit,
+        "Beyond an engineering reference (not a code requirement)",
+    ),
+    (
+        Basis::CodeLimit,
+        Status::NearLimit,
+        "Near a code limit (90 % of it or more)",
+    ),
+    (
+        Basis::Reference,
+        Status::NearLimit,
+        "Near an engineering reference (90 % of it or more)",
+    ),
+    (
+        Basis::CodeLimit,
+        Status::Incomplete,
+        "Not fully checked (a limit could not be checked)",
+    ),
+];
+
+fn summary(
+    i: &Inspection,
+    evaluation: &Evaluation,
+    notes: &HashMap<&str, &FindingNote>,
+) -> Summary {
     let line = |f: &Finding| SummaryLine {
-        use_text: f.use_text().unwrap_or_else(|| f.status.label().to_string()),
+        use_text: match (f.status, f.use_text()) {
+            (Status::OverLimit | Status::NearLimit, Some(u)) => u,
+            _ => f.status_label().to_string(),
+        },
         text: format!("{}: {}", f.title(), f.summary()),
         location: f.place.location.to_string(),
     };
-    let mut out = Summary {
-        counts: String::new(),
-        over: vec![],
-        near: vec![],
-        set_aside: vec![],
-    };
+    let mut groups: Vec<SummaryGroup> = SUMMARY_GROUPS
+        .iter()
+        .map(|(_, _, title)| SummaryGroup {
+            title: title.to_string(),
+            lines: vec![],
+        })
+        .collect();
+    let mut set_aside = Vec::new();
+    let mut counted: HashMap<(Basis, Status), usize> = HashMap::new();
     for f in evaluation.by_attention() {
         if let Some(reason) = not_applicable(f, notes) {
-            out.set_aside.push(SummaryLine {
+            set_aside.push(SummaryLine {
                 use_text: "set aside".into(),
                 text: format!("{}: {reason}", f.title()),
                 location: f.place.location.to_string(),
             });
             continue;
         }
-        match f.status {
-            Status::OverLimit => out.over.push(line(f)),
-            Status::NearLimit => out.near.push(line(f)),
-            _ => {}
+        *counted.entry((f.basis, f.status)).or_default() += 1;
+        // Not fully checked findings of any basis share one group.
+        let basis = if f.status == Status::Incomplete {
+            Basis::CodeLimit
+        } else {
+            f.basis
+        };
+        if let Some(g) = SUMMARY_GROUPS
+            .iter()
+            .position(|(b, s, _)| *b == basis && *s == f.status)
+        {
+            groups[g].lines.push(line(f));
         }
     }
-    out.counts = format!(
-        "{} over a limit, {} near a limit (90 % or more), {} within, {} not checked, {} set aside by the inspector",
-        out.over.len(),
-        out.near.len(),
-        evaluation.count(Status::Within),
-        evaluation.count(Status::NotChecked),
-        out.set_aside.len()
+    let n = |b: Basis, s: Status| counted.get(&(b, s)).copied().unwrap_or(0);
+    let across = |s: Status| {
+        [Basis::CodeLimit, Basis::Reference, Basis::Observed]
+            .into_iter()
+            .map(|b| n(b, s))
+            .sum::<usize>()
+    };
+    let counts = format!(
+        "Code limits: {} over, {} near, {} within. Engineering references: {} beyond, {} near, {} within. Observed conditions: {} to be evaluated. {} not fully checked, {} not checked, {} set aside by the inspector.",
+        n(Basis::CodeLimit, Status::OverLimit),
+        n(Basis::CodeLimit, Status::NearLimit),
+        n(Basis::CodeLimit, Status::Within),
+        n(Basis::Reference, Status::OverLimit),
+        n(Basis::Reference, Status::NearLimit),
+        n(Basis::Reference, Status::Within),
+        n(Basis::Observed, Status::ToEvaluate),
+        across(Status::Incomplete),
+        across(Status::NotChecked),
+        set_aside.len()
     );
-    out
+    groups.push(SummaryGroup {
+        title: "Entries that could not be used (check and correct them)".into(),
+        lines: evaluation
+            .problems
+            .iter()
+            .map(|p| SummaryLine {
+                use_text: "input".into(),
+                text: p.message.clone(),
+                location: p.location.clone(),
+            })
+            .collect(),
+    });
+    groups.push(SummaryGroup {
+        title: "Set aside by the inspector".into(),
+        lines: set_aside,
+    });
+    groups.retain(|g| !g.lines.is_empty());
+    Summary {
+        counts,
+        benchmark: benchmark_note(&i.code_edition, i.property.year_built),
+        groups,
+    }
 }
 
 fn area_section(
@@ -311,11 +405,14 @@ fn finding_block(
     if let Some(why) = &f.not_checked_because {
         facts.push(("Not checked".into(), why.to_string()));
     }
+    facts.push(("Basis".into(), f.basis.name().to_string()));
     facts.push(("Cites".into(), f.citation()));
     FindingBlock {
-        badge: match f.use_text() {
-            Some(u) => format!("{} {u}", f.status.label()),
-            None => f.status.label().to_string(),
+        badge: match (f.status, f.use_text()) {
+            (Status::OverLimit | Status::NearLimit | Status::Within, Some(u)) => {
+                format!("{} {u}", f.status_label())
+            }
+            _ => f.status_label().to_string(),
         },
         over: f.status == Status::OverLimit,
         title: f.title().to_string(),
@@ -398,17 +495,12 @@ fn appendix(i: &Inspection, contexts: &[MemberContext]) -> Vec<TextSection> {
 
 fn design_line(name: &str, v: &DesignValues) -> String {
     format!(
-        "{name}: Fb {:.0}, Fv {:.0}, Fc-perp {:.0}, E {:.0}; {}{}",
+        "{name}: Fb {:.0}, Fv {:.0}, Fc-perp {:.0}, E {:.0}; {}",
         v.fb.0,
         v.fv.0,
         v.fc_perp.0,
         v.e.0,
         v.source_short(),
-        if v.from_memory {
-            " (a value of this row is from memory)"
-        } else {
-            ""
-        }
     )
 }
 

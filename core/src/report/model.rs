@@ -55,13 +55,19 @@ pub struct Cover {
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Summary {
+    /// Counts by basis and status, the bases kept apart.
     pub counts: String,
-    /// Over a limit, highest use first.
-    pub over: Vec<SummaryLine>,
-    /// Near a limit (90 % or more).
-    pub near: Vec<SummaryLine>,
-    /// Findings the inspector marked not applicable, with why.
-    pub set_aside: Vec<SummaryLine>,
+    /// How the code edition stands to this house (a benchmark for an existing house).
+    pub benchmark: Option<String>,
+    /// Findings that need attention, in groups that keep code limits, engineering references
+    /// and observed conditions apart; empty groups left out.
+    pub groups: Vec<SummaryGroup>,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SummaryGroup {
+    pub title: String,
+    pub lines: Vec<SummaryLine>,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]

@@ -1,9 +1,11 @@
 //! Bored holes in sawn lumber joists (IRC R502.8.1): diameter, distance from the edges, from
 //! other holes and from notches.
 
-use super::shared::{dim, len};
+use super::shared::{dim, dim_max, len};
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::geometry::{circle_to_circle, circle_to_rect, hole_circle, notch_rect};
 use crate::model::ObservationKind;
 use crate::units::{Length, UnitSystem};
@@ -15,6 +17,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Bored hole in a sawn joist",
     code_section: Some("R502.8.1"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 /// Source: IRC 2018 R502.8.1: hole diameter not over 1/3 of the member's depth; holes not
@@ -103,7 +106,7 @@ fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
             Some(gap) => clearance("distance to the nearest other hole", Length::inches(gap)),
             None => Check::skipped(
                 "distance to the nearest other hole",
-                "2\" minimum",
+                dim(u, MIN_CLEARANCE),
                 "positions measured from different supports and the clear span not entered",
             ),
         });
@@ -123,7 +126,7 @@ fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
             Some(gap) => clearance("distance to the nearest notch", Length::inches(gap)),
             None => Check::skipped(
                 "distance to the nearest notch",
-                "2\" minimum",
+                dim(u, MIN_CLEARANCE),
                 "the notch's position is not known on the same line",
             ),
         });
@@ -139,12 +142,13 @@ fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
 impl Wording for HoleDetail {
     fn summary(&self, u: UnitSystem) -> String {
         format!(
-            "Hole {} across, {} from the support, centre {} above the bottom of a {} deep joist; limits d/3 = {} across, 2\" from edges, holes and notches",
+            "Hole {} across, {} from the support, centre {} above the bottom of a {} deep joist; limits d/3 = {} across, {} from edges, holes and notches",
             dim(u, self.diameter),
             len(u, self.from_support),
             dim(u, self.centre_above_bottom),
             dim(u, self.member_depth),
-            dim(u, self.member_depth * MAX_DIAMETER)
+            dim_max(u, self.member_depth * MAX_DIAMETER),
+            dim(u, MIN_CLEARANCE)
         )
     }
 
@@ -197,6 +201,37 @@ mod tests {
                 "{diameter} at {centre}"
             );
         }
+    }
+
+    // A hole whose neighbouring notch cannot be placed is not fully checked (the 2 in to
+    // a notch of IRC 2018 R502.8.1 was not checked), never within.
+    #[test]
+    fn an_unplaced_notch_leaves_the_hole_not_fully_checked() {
+        let notch = observation(ObservationKind::Notch {
+            edge: Edge::Bottom,
+            depth: inches(1.0),
+            length: inches(2.0),
+            at_end: false,
+            from_support: None,
+            end: End::A,
+        });
+        let f = &run(
+            check,
+            spf_no2((2, 10), 180.0),
+            vec![hole("a", 1.0, 30.0, 4.625), notch],
+        )[0];
+        assert_eq!(f.status, Status::Incomplete);
+        assert_eq!(f.status_label(), "not fully checked");
+        assert!(f
+            .not_checked_because
+            .as_deref()
+            .unwrap()
+            .contains("distance to the nearest notch"));
+        assert!(
+            !f.recommendation().contains("Within"),
+            "{}",
+            f.recommendation()
+        );
     }
 
     // Source: IRC 2018 R502.8.1, 2 in between holes and from notches.

@@ -3,7 +3,9 @@
 
 use super::shared::len;
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::lumber::NominalSize;
 use crate::model::BridgingKind;
 use crate::units::{Length, UnitSystem};
@@ -14,6 +16,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Bridging of deep joists",
     code_section: Some("R502.7.1"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 /// Source: IRC 2018 R502.7.1: intervals not exceeding 8 ft.
@@ -31,8 +34,12 @@ pub struct BridgingDetail {
 }
 
 pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
-    let Some(lumber) = &ctx.lumber else { return };
-    if !ctx.report_framing || lumber.section.nominal.depth <= DEEPEST_WITHOUT_BRIDGING {
+    // The requirement depends on the depth alone, not on species or grade.
+    let Some(section) = &ctx.section else { return };
+    if ctx.kind.is_engineered()
+        || !ctx.report_framing
+        || section.nominal.depth <= DEEPEST_WITHOUT_BRIDGING
+    {
         return;
     }
     let b = FindingBuilder::new(&RULE, ctx, None);
@@ -62,7 +69,7 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
             ctx.units,
         ))
         .finish(Detail::Bridging(BridgingDetail {
-            nominal: lumber.section.nominal,
+            nominal: section.nominal,
             interval,
             none,
         })),
@@ -140,6 +147,22 @@ mod tests {
         });
         assert_eq!(status(check, deep(240.0, none), vec![]), Status::OverLimit);
         assert_eq!(status(check, deep(90.0, none), vec![]), Status::NearLimit);
+    }
+
+    // Source: IRC 2018 R502.7.1 (depth only): a 2x14 at 20 ft with no bridging and no grade
+    // or species recorded is still over.
+    #[test]
+    fn depth_alone_sets_the_requirement() {
+        let mut f = deep(
+            240.0,
+            Some(Bridging {
+                kind: BridgingKind::None,
+                interval: None,
+            }),
+        );
+        f.grade = None;
+        f.species = None;
+        assert_eq!(status(check, f, vec![]), Status::OverLimit);
     }
 
     #[test]

@@ -2,8 +2,8 @@
 
 use super::shared::Ends;
 use super::Detail;
-use crate::finding::{Check, Finding, FindingBuilder, RuleInfo, Status, Wording};
-use crate::model::{EndRestraint, ObservationKind};
+use crate::finding::{Basis, Check, Finding, FindingBuilder, RuleInfo, Status, Wording};
+use crate::model::{EndRestraint, MemberKind, ObservationKind};
 use crate::units::UnitSystem;
 use crate::validate::MemberContext;
 use std::sync::Arc;
@@ -11,8 +11,9 @@ use std::sync::Arc;
 pub const RULE: RuleInfo = RuleInfo {
     id: "end-restraint",
     title: "Lateral restraint at joist ends",
-    code_section: Some("R502.7"),
+    code_section: Some("R502.7 and its exception for engineered members"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 const LIMIT: &str = "full-depth blocking, header, rim or band joist, or an adjoining stud";
@@ -22,6 +23,8 @@ const LIMIT: &str = "full-depth blocking, header, rim or band joist, or an adjoi
 pub struct RestraintDetail {
     pub ends: Ends,
     pub restraint: EndRestraint,
+    /// The member is an engineered product: R502.7's exception defers to the maker's details.
+    pub engineered: Option<MemberKind>,
 }
 
 pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
@@ -54,7 +57,11 @@ fn one(
             LIMIT,
             restraint != EndRestraint::None,
         ))
-        .finish(Detail::EndRestraint(RestraintDetail { ends, restraint }))
+        .finish(Detail::EndRestraint(RestraintDetail {
+            ends,
+            restraint,
+            engineered: ctx.kind.is_engineered().then_some(ctx.kind),
+        }))
 }
 
 impl Wording for RestraintDetail {
@@ -66,8 +73,19 @@ impl Wording for RestraintDetail {
         )
     }
 
+    fn assumptions(&self, _: UnitSystem) -> Vec<String> {
+        match self.engineered {
+            Some(kind) => vec![format!(
+                "For {}s, the exception to R502.7 requires lateral support as the maker's details show; the rim, blocking or hangers of those details are the measure",
+                kind.name()
+            )],
+            None => vec![],
+        }
+    }
+
     fn recommendation(&self, status: Status, _: UnitSystem) -> String {
         match status {
+            Status::OverLimit if self.engineered.is_some() => "Add the end restraint the maker's details call for (rim board, blocking panels or hangers), as the exception to R502.7 requires.".into(),
             Status::OverLimit => {
                 "Add full-depth blocking or a rim joist at the joist ends so they cannot roll."
                     .into()

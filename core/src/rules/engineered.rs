@@ -2,7 +2,7 @@
 //! the maker's instructions, which the engine does not carry.
 
 use super::Detail;
-use crate::finding::{Check, Finding, FindingBuilder, RuleInfo, Status, Text, Wording};
+use crate::finding::{Basis, Check, Finding, FindingBuilder, RuleInfo, Status, Text, Wording};
 use crate::model::{MemberKind, ObservationKind};
 use crate::units::UnitSystem;
 use crate::validate::MemberContext;
@@ -12,6 +12,7 @@ pub const CUT_RULE: RuleInfo = RuleInfo {
     title: "Cut or notch in an engineered member",
     code_section: Some("R502.8.2"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 pub const HOLE_RULE: RuleInfo = RuleInfo {
@@ -19,6 +20,7 @@ pub const HOLE_RULE: RuleInfo = RuleInfo {
     title: "Hole in an engineered member",
     code_section: Some("R502.8.2"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 /// Source: IRC 2018 R502.8.2: cuts, notches and holes in engineered wood products are not

@@ -3,7 +3,9 @@
 
 use super::shared::{dim, len, load_lines, LumberNotes};
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::mechanics::Governing;
 use crate::model::{MemberKind, ResolvedLoads};
@@ -15,6 +17,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Joist span",
     code_section: Some("R502.3.1, Tables R502.3.1(1) and R502.3.1(2)"),
     other_source: Some("NDS 2018 3.3, 3.4, 3.5 (bending, shear, deflection)"),
+    basis: Basis::CodeLimit,
 };
 
 /// What a span finding is worded from.
@@ -40,6 +43,60 @@ pub struct CheckedSpan {
     pub lumber: LumberNotes,
     /// Moisture content and the wet-service factors on Fb, Fv and E, when wet.
     pub wet: Option<(f64, [f64; 3])>,
+    /// True when the wet reading is the run's (the joist has none of its own).
+    pub wet_from_run: bool,
+    /// The spacing as taped, where it was held to a standard layout.
+    pub spacing_taped: Option<Length>,
+    /// Why the case is outside the printed span tables (empty: within them, a code limit).
+    pub outside_tables: Vec<&'static str>,
+}
+
+/// Why a checked span is outside the printed tables, which R502.3 leaves to engineering
+/// references: each reason in a few words. Empty when the tables cover the case.
+/// Source: IRC 2018 R502.3 and Tables R502.3.1(1)/(2): 2x6 to 2x12; DFL, HF, SP, SPF in
+/// SS, No. 1, No. 2, No. 3; 12, 16, 19.2 and 24 in; 30 or 40 psf live with 10 or 20 psf dead;
+/// L/360; dry service (the tables' footnotes), dressed sizes.
+pub fn outside_tables(ctx: &MemberContext) -> Vec<&'static str> {
+    let mut out = Vec::new();
+    let Some(lumber) = &ctx.lumber else {
+        return out;
+    };
+    let nominal = lumber.section.nominal;
+    if nominal.thickness != 2 {
+        out.push("members thicker than nominal 2 in");
+    }
+    if !(6..=12).contains(&nominal.depth) {
+        out.push(if nominal.depth > 12 {
+            "joists deeper than 2x12"
+        } else {
+            "joists shallower than 2x6"
+        });
+    }
+    if let Some(spacing) = ctx.framing.spacing {
+        if !crate::validate::STANDARD_LAYOUTS
+            .iter()
+            .any(|l| (spacing.in_inches() - l).abs() < 1e-9)
+        {
+            out.push("a spacing other than 12, 16, 19.2 or 24 in");
+        }
+    }
+    let (live, dead) = (ctx.loads.live.0, ctx.loads.dead.0);
+    if live != 30.0 && live != 40.0 {
+        out.push("a live load other than 30 or 40 psf");
+    }
+    if dead != 10.0 && dead != 20.0 {
+        out.push("a dead load other than 10 or 20 psf");
+    }
+    if ctx.loads.deflection_denominator != 360.0 {
+        out.push("a deflection limit other than L/360");
+    }
+    if lumber.section.rough_sawn {
+        out.push("a measured (rough-sawn) section");
+    }
+    if ctx.is_wet() {
+        out.push("wet service");
+    }
+    out
 }
 
 pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
@@ -90,16 +147,25 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
             .moisture_percent
             .filter(|_| ctx.is_wet())
             .map(|mc| (mc, [f.cm_fb, f.cm_fv, f.cm_e])),
+        wet_from_run: ctx.moisture_from_run,
+        spacing_taped: ctx.spacing_taped,
+        outside_tables: outside_tables(ctx),
+    };
+    let basis = if detail.outside_tables.is_empty() {
+        Basis::CodeLimit
+    } else {
+        Basis::Reference
     };
     out.push(
-        b.check(Check::numeric(
-            "clear span",
-            Value::Length(span),
-            Value::Length(allowable),
-            Bound::AtMost,
-            ctx.units,
-        ))
-        .finish(Detail::JoistSpan(SpanDetail::Checked(Box::new(detail)))),
+        b.basis(basis)
+            .check(Check::numeric(
+                "clear span",
+                Value::Length(span),
+                Value::Length(allowable),
+                Bound::AtMost,
+                ctx.units,
+            ))
+            .finish(Detail::JoistSpan(SpanDetail::Checked(Box::new(detail)))),
     );
 }
 
@@ -145,9 +211,23 @@ impl Wording for SpanDetail {
         out.push(format!(
             "Allowable span by NDS mechanics {all:.1} in (bending {bending:.1}, deflection {deflection:.1}, shear {shear:.1}); held to the nearest inch as the printed tables are"
         ));
+        if let Some(taped) = d.spacing_taped {
+            out.push(format!(
+                "Spacing taped at {} is held to the standard {} layout (within framing tolerance)",
+                dim(u, taped),
+                dim(u, d.spacing)
+            ));
+        }
         if let Some((mc, [fb, fv, e])) = d.wet {
             out.push(format!(
-                "Moisture content {mc:.0} % is over 19 %: checked in wet service (CM Fb {fb}, Fv {fv}, E {e}); the code's tables assume dry service"
+                "A moisture reading of {mc:.0} %{} is over 19 %: checked in wet service (CM Fb {fb}, Fv {fv}, E {e}) as a precaution; one pin reading shows the wood is wet now, not that it stays wet, and the code's tables assume dry service",
+                if d.wet_from_run { " taken on the run" } else { "" }
+            ));
+        }
+        if !d.outside_tables.is_empty() {
+            out.push(format!(
+                "Outside the code's printed span tables ({}): R502.3 leaves such spans to engineering references, so the allowable span is an NDS computation, not a code limit",
+                d.outside_tables.join(", ")
             ));
         }
         out
@@ -156,12 +236,18 @@ impl Wording for SpanDetail {
     fn recommendation(&self, status: Status, u: UnitSystem) -> String {
         match (self, status) {
             (SpanDetail::Engineered(_), _) => "Compare the span with the maker's published span table for this product, depth and spacing.".into(),
-            (SpanDetail::Checked(d), Status::OverLimit) => format!(
+            (SpanDetail::Checked(d), Status::OverLimit) if d.outside_tables.is_empty() => format!(
                 "The joists span {} more than the code allows for these loads. Refer to a licensed professional to evaluate and design a repair; options to discuss are listed.",
                 len(u, d.span - d.allowable)
             ),
+            (SpanDetail::Checked(d), Status::OverLimit) => format!(
+                "The joists span {} more than NDS mechanics allow for these loads (an engineering reference; the code's tables do not cover this case). Refer to a licensed professional to evaluate and design a repair; options to discuss are listed.",
+                len(u, d.span - d.allowable)
+            ),
             (_, Status::NearLimit) => "Within the allowable span but close to it: note any bounce or sag, and avoid added load (tile, heavy fixtures) without evaluation.".into(),
-            _ => "Within the allowable span for the loads assumed; no action for span.".into(),
+            (SpanDetail::Checked(d), Status::Within) if !d.outside_tables.is_empty() => "Within the span NDS mechanics allow for the loads assumed (an engineering reference); no action for span.".into(),
+            (_, Status::Within) => "Within the allowable span of the code's tables for the loads assumed; no action for span.".into(),
+            _ => String::new(),
         }
     }
 }

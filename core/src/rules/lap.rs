@@ -3,7 +3,9 @@
 
 use super::shared::dim;
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::model::ObservationKind;
 use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
@@ -14,6 +16,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Lap of joists over a support",
     code_section: Some("R502.6.1"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 /// Source: IRC 2018 R502.6.1: lapped not less than 3 in, nailed with at least three 10d face
@@ -68,7 +71,11 @@ fn one(ctx: &MemberContext, id: &Arc<str>, lap: LapDetail) -> Finding {
             Bound::AtLeast,
             ctx.units,
         ),
-        None => Check::skipped("lap length", "3\" minimum", "lap length not measured"),
+        None => Check::skipped(
+            "lap length",
+            format!("{} minimum", dim(ctx.units, MIN_LAP)),
+            "lap length not measured",
+        ),
     };
     let nailing = match lap.nails {
         Some(n) => Check::numeric(
@@ -110,7 +117,7 @@ impl Wording for LapDetail {
         match status {
             _ if self.spliced => "Confirm the splice is of equal strength to a 3 in lap with three 10d nails.".into(),
             Status::OverLimit => "Lengthen the lap or add nails (at least 3 in of lap and three 10d face nails), or add a splice of equal strength.".into(),
-            Status::NotChecked => "Measure the lap and count the nails.".into(),
+            Status::NotChecked | Status::Incomplete => "Measure the lap and count the nails.".into(),
             _ => "Lap meets the minimum.".into(),
         }
     }
@@ -137,7 +144,7 @@ mod tests {
             (Some(3.0), Some(3), Status::NearLimit),
             (Some(6.0), Some(4), Status::Within),
             (Some(6.0), Some(2), Status::OverLimit),
-            (Some(6.0), None, Status::Within),
+            (Some(6.0), None, Status::Incomplete), // nails not counted
             (None, None, Status::NotChecked),
         ];
         for (length, nails, expect) in table {

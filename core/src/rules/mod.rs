@@ -10,6 +10,7 @@ mod joist_span;
 mod lap;
 mod moisture;
 mod notch;
+mod notched_end;
 mod sag;
 pub use sag::sag_of;
 mod shared;
@@ -40,6 +41,8 @@ pub enum Detail {
     Sag(Box<sag::SagDetail>),
     Moisture(moisture::MoistureDetail),
     Damage(wood_damage::DamageDetail),
+    Cut(wood_damage::CutDetail),
+    EndShear(notched_end::EndShearDetail),
 }
 
 impl Detail {
@@ -58,6 +61,8 @@ impl Detail {
             Detail::Sag(d) => d.as_ref(),
             Detail::Moisture(d) => d,
             Detail::Damage(d) => d,
+            Detail::Cut(d) => d,
+            Detail::EndShear(d) => d,
         }
     }
 }
@@ -115,6 +120,10 @@ pub static RULES: &[Rule] = &[
         check: notch::check,
     },
     Rule {
+        info: &notched_end::RULE,
+        check: notched_end::check,
+    },
+    Rule {
         info: &bored_hole::RULE,
         check: bored_hole::check,
     },
@@ -137,6 +146,10 @@ pub static RULES: &[Rule] = &[
     Rule {
         info: &wood_damage::RULE,
         check: wood_damage::check,
+    },
+    Rule {
+        info: &wood_damage::CUT_RULE,
+        check: wood_damage::check_cuts,
     },
 ];
 

@@ -2,7 +2,9 @@
 //! wet-service factors by `joist-span`); near fibre saturation decay can grow.
 
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::model::ObservationKind;
 use crate::units::UnitSystem;
 use crate::validate::{MemberContext, WET_SERVICE_MC_PERCENT};
@@ -13,6 +15,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Moisture content of the wood",
     code_section: None,
     other_source: Some("NDS Supplement 2018 Table 4A (wet service over 19 % moisture content); USDA Wood Handbook (FPL-GTR-282) ch. 14"),
+    basis: Basis::Reference,
 };
 
 /// Moisture content around which decay fungi grow when sustained: roughly fibre saturation.
@@ -36,6 +39,8 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
 pub struct MoistureDetail {
     pub percent: f64,
     pub location: String,
+    /// Whether this member's span (and bearing) was re-checked in wet service.
+    pub span_rechecked: bool,
 }
 
 fn one(ctx: &MemberContext, id: &Arc<str>, percent: f64, location: &str) -> Finding {
@@ -50,7 +55,18 @@ fn one(ctx: &MemberContext, id: &Arc<str>, percent: f64, location: &str) -> Find
         .finish(Detail::Moisture(MoistureDetail {
             percent,
             location: location.to_string(),
+            span_rechecked: ctx.span.is_some() && ctx.clear_span().is_some(),
         }))
+}
+
+impl MoistureDetail {
+    fn rechecked_text(&self) -> &'static str {
+        if self.span_rechecked {
+            ": the span and bearing were re-checked in wet service"
+        } else {
+            ": the span could not be re-checked in wet service (its lumber, spacing or span was not entered)"
+        }
+    }
 }
 
 impl Wording for MoistureDetail {
@@ -67,16 +83,24 @@ impl Wording for MoistureDetail {
     }
 
     fn assumptions(&self, _: UnitSystem) -> Vec<String> {
-        vec!["Pin-meter reading as shown, without species or temperature correction".into()]
+        vec![
+            "Pin-meter reading as shown, without species or temperature correction".into(),
+            "One reading shows the wood's moisture on the day; whether it stays wet (sustained moisture) needs readings over time".into(),
+            "19 % is the NDS wet-service threshold, an engineering reference, not a code limit".into(),
+        ]
     }
 
     fn recommendation(&self, status: Status, _: UnitSystem) -> String {
         match status {
             Status::OverLimit if self.percent >= DECAY_RISK_PERCENT => format!(
-                "Wet wood ({:.0} %): the span was re-checked in wet service, and sustained moisture near {DECAY_RISK_PERCENT:.0} % or more lets decay fungi grow. Find and stop the water source (grading, gutters, plumbing, vapour retarder, ventilation) and probe for decay.",
-                self.percent
+                "Wet wood ({:.0} %){}; if moisture near {DECAY_RISK_PERCENT:.0} % or more is sustained, decay fungi can grow. Find and stop the water source (grading, gutters, plumbing, vapour retarder, ventilation), probe for decay, and re-measure in another season.",
+                self.percent,
+                self.rechecked_text()
             ),
-            Status::OverLimit => "Above 19 %: the span was re-checked in wet service. Find and reduce the moisture source and re-measure.".into(),
+            Status::OverLimit => format!(
+                "Above 19 %{}. Find and reduce the moisture source and re-measure.",
+                self.rechecked_text()
+            ),
             Status::NearLimit => "Close to wet service; re-measure in the wet season.".into(),
             _ => "Dry service.".into(),
         }
@@ -115,6 +139,15 @@ mod tests {
         }
         let f = &run(check, spf_no2((2, 10), 180.0), reading(28.0))[0];
         assert!(f.recommendation().contains("decay"));
+        assert!(f.recommendation().contains("were re-checked"));
+        let mut unknown = spf_no2((2, 10), 180.0);
+        unknown.size = None;
+        let f = &run(check, unknown, reading(28.0))[0];
+        assert!(
+            f.recommendation().contains("could not be re-checked"),
+            "{}",
+            f.recommendation()
+        );
     }
 
     #[test]

@@ -1,9 +1,11 @@
 //! Notches in sawn lumber joists (IRC R502.8.1): depth, length, the middle third, the ends,
 //! and the tension side of members 4 in nominal or thicker.
 
-use super::shared::{dim, len};
+use super::shared::{dim, dim_max, len};
 use super::Detail;
-use crate::finding::{Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording};
+use crate::finding::{
+    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+};
 use crate::geometry::{middle_third, notch_rect};
 use crate::model::{Edge, ObservationKind};
 use crate::units::{Length, UnitSystem};
@@ -15,6 +17,7 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Notch in a sawn joist",
     code_section: Some("R502.8.1"),
     other_source: None,
+    basis: Basis::CodeLimit,
 };
 
 /// Source: IRC 2018 R502.8.1: notches not deeper than 1/6 of the member's depth, not longer
@@ -73,13 +76,21 @@ fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
     let d = section.depth;
     let u = ctx.units;
     if *at_end {
-        b = b.check(Check::numeric(
-            "end notch depth",
-            Value::Length(*notch_depth),
-            Value::Length(d * END_NOTCH_DEPTH),
-            Bound::AtMost,
-            u,
-        ));
+        b = b
+            .check(Check::numeric(
+                "end notch depth",
+                Value::Length(*notch_depth),
+                Value::Length(d * END_NOTCH_DEPTH),
+                Bound::AtMost,
+                u,
+            ))
+            .check(Check::numeric(
+                "end notch length",
+                Value::Length(*length),
+                Value::Length(d * NOTCH_LENGTH),
+                Bound::AtMost,
+                u,
+            ));
     } else {
         b = b
             .check(Check::numeric(
@@ -132,10 +143,12 @@ impl Wording for NotchDetail {
         let d = self.member_depth;
         if self.at_end {
             format!(
-                "Notch at the end, {} deep in the {edge} edge of a {} deep joist; limit d/4 = {}",
+                "Notch at the end, {} deep x {} long in the {edge} edge of a {} deep joist; limits d/4 = {} deep, d/3 = {} long",
                 dim(u, self.depth),
+                dim(u, self.length),
                 dim(u, d),
-                dim(u, d * END_NOTCH_DEPTH)
+                dim_max(u, d * END_NOTCH_DEPTH),
+                dim_max(u, d * NOTCH_LENGTH)
             )
         } else {
             format!(
@@ -144,8 +157,8 @@ impl Wording for NotchDetail {
                 dim(u, self.length),
                 self.from_support.map_or("?".to_string(), |f| len(u, f)),
                 dim(u, d),
-                dim(u, d * SPAN_NOTCH_DEPTH),
-                dim(u, d * NOTCH_LENGTH)
+                dim_max(u, d * SPAN_NOTCH_DEPTH),
+                dim_max(u, d * NOTCH_LENGTH)
             )
         }
     }
@@ -170,8 +183,8 @@ impl Wording for NotchDetail {
         match status {
             Status::OverLimit => "The notch exceeds the code's limits and weakens the joist. Refer to a licensed professional for a repair design (for example sistering or reinforcement); do not cut further.".into(),
             Status::NearLimit => "The notch is close to the limit; do not enlarge it.".into(),
-            Status::NotChecked => "Enter the missing measurements to check the notch.".into(),
             Status::Within => "Within the code's notch limits.".into(),
+            _ => "Enter the missing measurements to check the notch.".into(),
         }
     }
 }
@@ -244,8 +257,10 @@ mod tests {
             (1.0, 2.0, Some(58.0), false, Status::NearLimit), // reaches 60 = L/3
             (1.0, 2.0, Some(58.5), false, Status::OverLimit), // into the middle third
             (1.0, 2.0, Some(88.0), false, Status::OverLimit), // at mid-span
-            (2.25, 4.0, None, true, Status::NearLimit),       // end notch, 97 % of d/4
-            (2.375, 4.0, None, true, Status::OverLimit),
+            (2.25, 3.0, None, true, Status::NearLimit),       // end notch, 97 % of d/4
+            (2.375, 3.0, None, true, Status::OverLimit),
+            (2.0, 3.25, None, true, Status::OverLimit), // end notch longer than d/3
+            (1.0, 2.0, None, false, Status::Incomplete), // middle third not checked
             (2.0, 3.0, Some(36.0), false, Status::OverLimit), // the 2 in notch 3 ft out
         ];
         for (depth, length, from, at_end, expect) in table {

@@ -3,7 +3,7 @@
 
 use crate::lumber::{GradeChoice, Section, Species, UNKNOWN_GRADE_DEFAULT};
 use crate::model::{End, ResolvedLoads};
-use crate::units::{format_dimension, format_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, round_down, round_up, Length, UnitSystem};
 use crate::validate::MemberContext;
 
 /// A span or position in feet-inches (`15' 2"`), or mm.
@@ -14,6 +14,16 @@ pub fn len(units: UnitSystem, length: Length) -> String {
 /// A member dimension or short length in inches (`9-1/4"`), or mm.
 pub fn dim(units: UnitSystem, length: Length) -> String {
     format_dimension(length, units)
+}
+
+/// A maximum as it is held and shown: rounded down to the display grid.
+pub fn dim_max(units: UnitSystem, length: Length) -> String {
+    format_dimension(round_down(length, units), units)
+}
+
+/// A minimum as it is held and shown: rounded up to the display grid.
+pub fn dim_min(units: UnitSystem, length: Length) -> String {
+    format_dimension(round_up(length, units), units)
 }
 
 /// Which end(s) of a member a finding is about.
@@ -40,8 +50,6 @@ pub struct LumberNotes {
     pub no_stamp: Option<Species>,
     /// Set when measured dimensions were used.
     pub measured: Option<Section>,
-    /// Set when a design value of the row used is from memory: the table cited.
-    pub from_memory: Option<&'static str>,
 }
 
 impl LumberNotes {
@@ -52,11 +60,6 @@ impl LumberNotes {
                 .filter(|l| l.grade == GradeChoice::NoStampVisible)
                 .map(|l| l.species),
             measured: lumber.filter(|l| l.section.rough_sawn).map(|l| l.section),
-            from_memory: ctx
-                .span
-                .as_ref()
-                .filter(|s| s.design.from_memory)
-                .map(|s| s.design.source_short()),
         }
     }
 
@@ -75,11 +78,6 @@ impl LumberNotes {
                 dim(units, section.thickness),
                 dim(units, section.depth),
                 section.nominal
-            ));
-        }
-        if let Some(table) = self.from_memory {
-            out.push(format!(
-                "Design values: {table} (a value in this row is from memory, not a seen copy)"
             ));
         }
         out

@@ -1,9 +1,10 @@
-//! Options to discuss for an over-spanned joist, computed, not prescribed: where a mid-span
-//! support would have to go, the smallest standard size, the widest standard spacing.
+//! Options to discuss for an over-spanned joist, computed, not prescribed, and each one
+//! buildable on what is there: where a mid-span support would have to go, sistering each
+//! joist full length at the same layout, and the smallest deeper size at the same layout.
 
 use super::shared::len;
 use super::Detail;
-use crate::finding::{Finding, FindingBuilder, RuleInfo, Status, Wording};
+use crate::finding::{Basis, Finding, FindingBuilder, RuleInfo, Status, Wording};
 use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::mechanics::{allowable_span, SpanInput};
 use crate::units::{Length, UnitSystem};
@@ -14,11 +15,8 @@ pub const RULE: RuleInfo = RuleInfo {
     title: "Options to discuss for an over-span",
     code_section: Some("R502.3.1"),
     other_source: Some("NDS 2018 3.3-3.5 (computed alternatives)"),
+    basis: Basis::Reference,
 };
-
-/// Standard on-centre spacings of the IRC span tables, widest first.
-/// Source: IRC 2018 Tables R502.3.1(1)/(2) columns (12, 16, 19.2, 24 in).
-const STANDARD_SPACINGS: [f64; 4] = [24.0, 19.2, 16.0, 12.0];
 
 /// The options, as data, for the app and the report.
 #[derive(Debug, Clone, PartialEq)]
@@ -28,7 +26,9 @@ pub struct SpanOptions {
     /// A support line anywhere in this range from support A makes both spans pass.
     pub support_zone: Option<(Length, Length)>,
     pub smallest_size: Option<(NominalSize, Length)>,
-    pub widest_spacing: Option<(f64, Length)>,
+    /// The allowable span with each joist sistered full length by one of the same size and
+    /// grade (two plies at the same layout), and whether it reaches the span.
+    pub sistered: Option<(Length, bool)>,
 }
 
 /// Computes the options for a sawn member whose clear span is over its allowable span.
@@ -70,18 +70,21 @@ pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
             })
             .map(|a| (n, a))
         });
-    let widest_spacing = STANDARD_SPACINGS.into_iter().find_map(|s| {
-        passes(&SpanInput {
-            spacing: Length::inches(s),
-            ..base.clone()
-        })
-        .map(|a| (s, a))
-    });
+    let two_plies = crate::lumber::Section {
+        thickness: lumber.section.thickness * 2.0,
+        ..lumber.section
+    };
+    let sistered = allowable_span(&SpanInput {
+        section: two_plies,
+        ..base.clone()
+    })
+    .map(|r| r.allowable_rounded())
+    .map(|a| (a, span <= a));
     Some(SpanOptions {
         longest_passing: longest,
         support_zone,
         smallest_size,
-        widest_spacing,
+        sistered,
     })
 }
 
@@ -139,19 +142,20 @@ impl Wording for OptionsDetail {
             },
             match o.smallest_size {
                 Some((size, allowable)) => {
-                    format!("{size} {}, {}, at the same spacing allows {}", self.species.name(), self.grade, len(u, allowable))
+                    format!("Replacing with {size} {}, {}, at the same layout allows {}", self.species.name(), self.grade, len(u, allowable))
                 }
                 None => format!("No {thickness}x size up to {thickness}x14 at this spacing reaches the span"),
             },
-            match o.widest_spacing {
-                Some((spacing, allowable)) => format!("{} at {spacing} in on centre allows {}", self.nominal, len(u, allowable)),
-                None => format!("No standard spacing (12 to 24 in) of {} reaches the span", self.nominal),
+            match o.sistered {
+                Some((allowable, true)) => format!("Sistering each joist full length with a {} of the same grade (two plies at the same layout) allows {}", self.nominal, len(u, allowable)),
+                Some((allowable, false)) => format!("Sistering each joist full length with a {} would allow only {}: not enough alone", self.nominal, len(u, allowable)),
+                None => "Sistering could not be computed for this lumber".into(),
             },
         ]
     }
 
     fn assumptions(&self, _: UnitSystem) -> Vec<String> {
-        vec!["Same species, grade and loads; each option computed as a simple span. A joist continuous over a new support behaves differently: the design is for a licensed professional.".into()]
+        vec!["Same species, grade, layout and loads; each option re-checked by the same computation as a simple span. A sistered pair is counted as two full-length plies acting together, which depends on its fastening; a joist continuous over a new support behaves differently: the design is for a licensed professional.".into()]
     }
 
     fn recommendation(&self, _: Status, _: UnitSystem) -> String {
@@ -166,8 +170,9 @@ mod tests {
 
     // Source: IRC 2015 Table R502.3.1(2), SPF No. 2 at 40/10 psf: 2x10 at 16 in 15-5 (185 in),
     // so a 16-0 (192 in) span needs a support between 7 in and 185 in from support A.
-    // The 2x12 and 12 in spacing results follow from the same mechanics (tests/ checks the
-    // mechanics against every printed cell).
+    // The 2x12 result follows from the same mechanics (tests/ checks the mechanics against
+    // every printed cell). Two plies of 2x10 (b = 3 in) double S, I and A: bending rises by
+    // sqrt(2) to 261 in, deflection by 2^(1/3) from 188.03 to 236.9 in, which governs: 237 in.
     #[test]
     fn options_for_a_16_ft_2x10() {
         let inspection = inspection(spf_no2((2, 10), 192.0), vec![], Default::default());
@@ -176,7 +181,9 @@ mod tests {
         assert_eq!(o.longest_passing, inches(185.0));
         assert_eq!(o.support_zone, Some((inches(7.0), inches(185.0))));
         assert_eq!(o.smallest_size.map(|s| s.0), Some(NominalSize::new(2, 12)));
-        assert_eq!(o.widest_spacing.map(|s| s.0), Some(12.0));
+        let (sistered, reaches) = o.sistered.unwrap();
+        assert!(reaches);
+        assert!((sistered.in_inches() - 237.0).abs() < 1e-9, "{sistered:?}");
     }
 
     #[test]
@@ -185,7 +192,7 @@ mod tests {
         let f = run(check, spf_no2((2, 10), 192.0), vec![]);
         assert_eq!(f.len(), 1);
         assert!(
-            f[0].options()[1].starts_with("2x12"),
+            f[0].options()[1].starts_with("Replacing with 2x12"),
             "{:?}",
             f[0].options()
         );

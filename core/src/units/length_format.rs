@@ -29,6 +29,30 @@ pub fn format_dimension(length: Length, units: UnitSystem) -> String {
     }
 }
 
+/// The grid lengths are shown on: 1/16 in, or 1 mm.
+fn display_step_inches(units: UnitSystem) -> f64 {
+    match units {
+        UnitSystem::Imperial => 1.0 / 16.0,
+        UnitSystem::Metric => 1.0 / super::length::MM_PER_INCH,
+    }
+}
+
+/// Steps of the display grid in a length, with a tolerance for values already on the grid.
+fn steps(length: Length, units: UnitSystem) -> f64 {
+    length.in_inches() / display_step_inches(units)
+}
+
+/// A maximum as shown: rounded down to the display grid, so that a value equal to the
+/// shown limit passes (2x10 d/6 = 1.542 in is shown, and held, as 1-1/2 in).
+pub fn round_down(length: Length, units: UnitSystem) -> Length {
+    Length::inches((steps(length, units) + 1e-6).floor().max(0.0) * display_step_inches(units))
+}
+
+/// A minimum as shown: rounded up to the display grid.
+pub fn round_up(length: Length, units: UnitSystem) -> Length {
+    Length::inches((steps(length, units) - 1e-6).ceil().max(0.0) * display_step_inches(units))
+}
+
 fn feet_inches(length: Length) -> String {
     let sixteenths = (length.in_inches() * 16.0).round().max(0.0) as u64;
     let feet = sixteenths / 192;
@@ -60,6 +84,26 @@ fn inches_text(sixteenths: u64) -> String {
 
 #[cfg(test)]
 mod tests {
+    // A limit shown is the limit held: maxima round down, minima up, on the shown grid.
+    // Source: IRC 2018 R502.8.1 (d/6 of a 9-1/4 in 2x10 is 1.542 in).
+    #[test]
+    fn limits_round_towards_the_safe_side() {
+        use super::{round_down, round_up};
+        let d6 = Length::inches(9.25 / 6.0);
+        assert_eq!(round_down(d6, UnitSystem::Imperial), Length::inches(1.5));
+        assert_eq!(round_up(d6, UnitSystem::Imperial), Length::inches(1.5625));
+        assert_eq!(
+            round_down(Length::inches(1.5), UnitSystem::Imperial),
+            Length::inches(1.5)
+        );
+        assert_eq!(
+            round_up(Length::inches(1.5), UnitSystem::Imperial),
+            Length::inches(1.5)
+        );
+        let mm = round_down(d6, UnitSystem::Metric).in_millimetres();
+        assert!((mm - 39.0).abs() < 1e-9, "{mm}");
+        assert!((round_up(d6, UnitSystem::Metric).in_millimetres() - 40.0).abs() < 1e-9);
+    }
     use super::*;
     use crate::units::parse_length;
     use proptest::prelude::*;

@@ -29,6 +29,8 @@ pub enum LengthError {
         "fraction {0} is not valid: the bottom must be a whole number above 0 and above the top"
     )]
     BadFraction(String),
+    #[error("fraction {typed} is 1 or more: did you mean {suggestion}?")]
+    ImproperFraction { typed: String, suggestion: String },
     #[error("{0} is larger than 1000 ft")]
     TooLarge(String),
     #[error("the length is incomplete")]
@@ -254,13 +256,17 @@ impl Parser<'_> {
                 }
                 if let Some(Token::Fraction(part, text)) = self.peek().cloned() {
                     if part >= 1.0 {
-                        return Err(LengthError::BadFraction(text));
+                        return Err(improper(&text, None));
                     }
                     self.at += 1;
                     whole + part
                 } else {
                     whole
                 }
+            }
+            // A bare fraction of 1 or more is a slip (`11/4"` typed for 1-1/4"), not a length.
+            Some(Token::Fraction(part, text)) if part >= 1.0 => {
+                return Err(improper(&text, Some(part)))
             }
             Some(Token::Fraction(part, _)) => part,
             Some(token) => return Err(LengthError::Unexpected(describe(&token))),
@@ -273,6 +279,36 @@ impl Parser<'_> {
             return Err(LengthError::Unexpected("a metric unit here".into()));
         }
         Ok((value, marked))
+    }
+}
+
+/// The refusal of a fraction of 1 or more, with what was likely meant: the top's last digit
+/// as the fraction after a whole number (`11/4` -> `1-1/4"`), else its value as a mixed
+/// number (`99/2` -> `49-1/2"`). `value` is None for a fraction that follows a whole number,
+/// whose value is then only named.
+fn improper(text: &str, value: Option<f64>) -> LengthError {
+    let mut meant = Vec::new();
+    if let (Some((top, bottom)), Some(v)) = (text.split_once('/'), value) {
+        let b: u32 = bottom.parse().unwrap_or(0);
+        for cut in 1..top.len() {
+            let (whole, part) = top.split_at(cut);
+            let p: u32 = part.parse().unwrap_or(0);
+            if p > 0 && p < b && !part.starts_with('0') {
+                meant.push(format!("{whole}-{part}/{bottom}\""));
+            }
+        }
+        let mixed = super::format_dimension(super::Length::inches(v), super::UnitSystem::Imperial);
+        if !meant.contains(&mixed) {
+            meant.push(mixed);
+        }
+    }
+    LengthError::ImproperFraction {
+        typed: text.to_string(),
+        suggestion: if meant.is_empty() {
+            "a fraction under 1 (carry the whole inches in front)".into()
+        } else {
+            meant.join(" or ")
+        },
     }
 }
 
@@ -351,7 +387,13 @@ mod tests {
             ("163.5", LengthError::NoUnit),
             ("13' 14\"", LengthError::InchesOverTwelve("14 \"".into())),
             ("1/0\"", LengthError::BadFraction("1/0".into())),
-            ("7 3/2\"", LengthError::BadFraction("3/2".into())),
+            (
+                "7 3/2\"",
+                LengthError::ImproperFraction {
+                    typed: "3/2".into(),
+                    suggestion: "a fraction under 1 (carry the whole inches in front)".into(),
+                },
+            ),
             ("1.2.3\"", LengthError::NotANumber("1.2.3".into())),
             ("13 7", LengthError::Unexpected("7".into())),
             ("13' ft", LengthError::Unexpected("'".into())),
@@ -370,6 +412,29 @@ mod tests {
             parse_length(&"9".repeat(10_000), None),
             Err(LengthError::TooLong(10_000))
         );
+    }
+
+    // A bare fraction of 1 or more is refused with what was likely meant, as a fraction of
+    // 1 or more after whole inches is (common practice, no source: tape fractions are
+    // proper).
+    #[test]
+    fn improper_fractions_are_questioned_not_guessed() {
+        let refused = |text: &str, bare: Option<f64>| match parse_length(text, bare) {
+            Err(LengthError::ImproperFraction { suggestion, .. }) => suggestion,
+            other => panic!("{text:?}: {other:?}"),
+        };
+        assert_eq!(refused("11/4\"", None), "1-1/4\" or 2-3/4\"");
+        assert_eq!(refused("11/2", Some(1.0)), "1-1/2\" or 5-1/2\"");
+        assert_eq!(refused("16/16\"", None), "1-6/16\" or 1\"");
+        assert_eq!(refused("99/2\"", None), "49-1/2\"");
+        assert!(refused("12' 11 16/16\"", None).contains("under 1"));
+        let message = parse_length("11/4\"", None).unwrap_err().to_string();
+        assert_eq!(
+            message,
+            "fraction 11/4 is 1 or more: did you mean 1-1/4\" or 2-3/4\"?"
+        );
+        // Proper fractions still read.
+        assert_eq!(parse_length("15/16\"", None).unwrap().in_inches(), 0.9375);
     }
 
     #[test]

@@ -5,9 +5,10 @@ use anyhow::Context;
 use clap::Args;
 use serde_json::json;
 use std::path::PathBuf;
+use undercroft_core::finding::benchmark_note;
 use undercroft_core::finding::Bound;
 use undercroft_core::interchange::from_json_bytes;
-use undercroft_core::{evaluate, Finding, Inspection, Status, SCREENING_NOTICE};
+use undercroft_core::{evaluate, Finding, Inspection, SCREENING_NOTICE};
 
 #[derive(Args)]
 pub struct CheckArgs {
@@ -38,12 +39,8 @@ pub fn run(args: &CheckArgs, db: Option<&std::path::Path>) -> anyhow::Result<()>
             "inspection_id": inspection.id,
             "code_edition": inspection.code_edition,
             "notice": SCREENING_NOTICE,
-            "counts": {
-                "over_limit": evaluation.count(Status::OverLimit),
-                "near_limit": evaluation.count(Status::NearLimit),
-                "within": evaluation.count(Status::Within),
-                "not_checked": evaluation.count(Status::NotChecked),
-            },
+            "benchmark": benchmark_note(&inspection.code_edition, inspection.property.year_built),
+            "counts": evaluation.counts(),
             "findings": evaluation.findings,
             "problems": evaluation.problems,
         });
@@ -80,16 +77,10 @@ pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evalua
             }
         ),
     );
-    line(
-        &mut out,
-        format!(
-            "{} over limit, {} near limit, {} within, {} not checked\n",
-            evaluation.count(Status::OverLimit),
-            evaluation.count(Status::NearLimit),
-            evaluation.count(Status::Within),
-            evaluation.count(Status::NotChecked)
-        ),
-    );
+    if let Some(note) = benchmark_note(&inspection.code_edition, inspection.property.year_built) {
+        line(&mut out, format!("{note}."));
+    }
+    line(&mut out, format!("{}\n", evaluation.counts().text()));
     for f in evaluation.by_attention() {
         finding_text(&mut out, f);
     }
@@ -112,7 +103,7 @@ fn finding_text(out: &mut String, f: &Finding) {
     let summary = f.summary();
     out.push_str(&format!(
         "[{}{share}] {} - {}\n",
-        f.status.label(),
+        f.status_label(),
         f.rule_id(),
         f.place.location
     ));
@@ -139,6 +130,7 @@ fn finding_text(out: &mut String, f: &Finding) {
         }
         _ => {}
     }
+    out.push_str(&format!("  basis: {}\n", f.basis.name()));
     out.push_str(&format!("  cites {}\n", f.citation()));
     for a in f.assumptions() {
         out.push_str(&format!("  assumes: {a}\n"));

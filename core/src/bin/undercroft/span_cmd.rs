@@ -111,7 +111,6 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
             "shear_span_in": r.shear_span_in,
             "factors": r.factors,
             "design_values_source": r.design.source_short(),
-            "design_values_from_memory": r.design.from_memory,
         });
         println!("{}", serde_json::to_string_pretty(&out)?);
         return Ok(());
@@ -163,9 +162,8 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
     );
     let f = &r.factors;
     println!(
-        "Design values ({}{}): Fb' = {:.0} psi (CD {} CM {} CF {} Cr {}), E' = {:.0} psi, Fv' = {:.0} psi",
+        "Design values ({}): Fb' = {:.0} psi (CD {} CM {} CF {} Cr {}), E' = {:.0} psi, Fv' = {:.0} psi",
         r.design.source_short(),
-        if r.design.from_memory { "; a value of this row is from memory" } else { "" },
         f.fb_adjusted_psi,
         f.cd,
         f.cm_fb,

@@ -4,7 +4,7 @@
 use super::draw::side_view;
 use super::fonts::{self, Face};
 use super::writer::{Writer, INK, MARGIN, MUTED};
-use crate::report::{AreaSection, FindingBlock, MemberRow, PhotoSlot, Report, SummaryLine};
+use crate::report::{AreaSection, FindingBlock, MemberRow, PhotoSlot, Report};
 
 const BODY: f32 = 9.5;
 const SMALL: f32 = 8.0;
@@ -65,18 +65,14 @@ pub fn summary(w: &mut Writer, r: &Report) {
     w.new_page();
     heading(w, "Summary", 16.0);
     w.paragraph(&r.summary.counts, BODY, Face::Regular, 0.0, MUTED);
+    if let Some(benchmark) = &r.summary.benchmark {
+        w.space(3.0);
+        w.paragraph(&format!("{benchmark}."), BODY, Face::Regular, 0.0, MUTED);
+    }
     w.space(6.0);
-    let groups: [(&str, &Vec<SummaryLine>); 3] = [
-        ("Over a limit", &r.summary.over),
-        ("Near a limit (90 % of it or more)", &r.summary.near),
-        ("Set aside by the inspector", &r.summary.set_aside),
-    ];
-    for (title, lines) in groups {
-        if lines.is_empty() {
-            continue;
-        }
-        heading(w, title, 12.0);
-        for line in lines {
+    for group in &r.summary.groups {
+        heading(w, &group.title, 12.0);
+        for line in &group.lines {
             w.ensure(BODY * 3.0);
             w.space(2.0);
             let top = w.y;
@@ -95,9 +91,9 @@ pub fn summary(w: &mut Writer, r: &Report) {
             w.space(3.0);
         }
     }
-    if r.summary.over.is_empty() && r.summary.near.is_empty() {
+    if r.summary.groups.is_empty() {
         w.paragraph(
-            "Nothing measured is over or near a limit.",
+            "Nothing measured is over or near a limit, and no condition was recorded for evaluation.",
             BODY,
             Face::Regular,
             0.0,
@@ -210,9 +206,9 @@ fn table_row(
 }
 
 fn badge_colors(f: &FindingBlock) -> ((f32, f32, f32), (f32, f32, f32)) {
-    if f.over {
+    if f.over || f.badge.starts_with("TO BE") {
         ((0.62, 0.1, 0.1), (1.0, 1.0, 1.0))
-    } else if f.badge.starts_with("near") {
+    } else if f.badge.starts_with("near") || f.badge.starts_with("not fully") {
         ((0.98, 0.8, 0.35), INK)
     } else {
         ((0.9, 0.9, 0.9), INK)
