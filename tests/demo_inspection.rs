@@ -168,3 +168,23 @@ fn observed_damage_reaches_the_top_and_shortens_the_bearing() {
     // A rough-sawn 2x14 at 24 in is outside the printed tables: an engineering reference.
     assert_eq!(family_span.basis, Basis::Reference);
 }
+
+/// In a metric inspection every limit, summary and recommendation is in millimetres: no inch
+/// or foot marks left (the inspector's own words aside, which have none in the demo).
+#[test]
+fn metric_findings_show_no_inches() {
+    let mut inspection = demo();
+    inspection.units = undercroft_core::units::UnitSystem::Metric;
+    for f in evaluate(&inspection).findings {
+        let mut texts = vec![f.summary(), f.recommendation()];
+        texts.extend(f.checks.iter().map(|c| c.limit_shown().text));
+        texts.extend(f.options());
+        for text in texts {
+            assert!(
+                !text.contains('"') && !text.contains("' "),
+                "{}: {text}",
+                f.rule_id()
+            );
+        }
+    }
+}

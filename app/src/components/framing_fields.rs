@@ -4,7 +4,8 @@
 
 use dioxus::prelude::*;
 use undercroft_core::forms::{
-    FramingForm, BRIDGING, END_RESTRAINTS, GRADES, MEMBER_KINDS, SIZES, SPECIES, SUPPORTS,
+    FramingForm, BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS, ROOM_USES, SIZES,
+    SPECIES, SUPPORTS,
 };
 
 /// A field changed: its name (as `FramingForm::set` takes it) and its new text.
@@ -32,6 +33,8 @@ pub fn FramingFields(
         Pick { name: "end_restraint", label: "End restraint", picks: END_RESTRAINTS, value: form.end_restraint.clone(), inherited: inherits.then(|| base.end_restraint.clone()), on_change }
         Pick { name: "bridging", label: "Bridging", picks: BRIDGING, value: form.bridging.clone(), inherited: inherits.then(|| base.bridging.clone()), on_change }
         Typed { name: "bridging_interval", label: "Largest distance between bridging lines (feet)", inputmode: "text", value: form.bridging_interval.clone(), inherited: base.bridging_interval.clone(), on_change }
+        Pick { name: "room_use_above", label: "Room above, if not as the area", picks: ROOM_USES, value: form.room_use_above.clone(), inherited: inherits.then(|| base.room_use_above.clone()), on_change }
+        Pick { name: "finishes", label: "Finishes above, if not as the area", picks: FINISHES, value: form.finishes.clone(), inherited: inherits.then(|| base.finishes.clone()), on_change }
     }
 }
 
@@ -59,6 +62,7 @@ fn Pick(
                 .map_or("not entered", |p| p.1);
             format!("Same as the run ({shown})")
         }
+        None if matches!(name, "room_use_above" | "finishes") => "As the area".to_string(),
         None => "Pick".to_string(),
     };
     rsx! {

@@ -3,6 +3,7 @@
 use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::model::{
     ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
+    RoomUse,
 };
 use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
 use serde::{Deserialize, Serialize};
@@ -40,6 +41,10 @@ pub struct FramingForm {
     pub bridging: String,
     /// Feet when no unit is typed (mm in metric).
     pub bridging_interval: String,
+    /// Where the room above differs from its area's: `sleeping`, `living`; empty inherits.
+    pub room_use_above: String,
+    /// Where the finishes differ from the area's: `light`, `heavy`; empty inherits.
+    pub finishes: String,
 }
 
 /// Inches per unit assumed for a bare number in a field: short lengths in inches, spans in
@@ -90,6 +95,16 @@ impl FramingForm {
             end_restraint: f.end_restraint.map(|r| enum_text(&r)).unwrap_or_default(),
             bridging: f.bridging.map(|b| enum_text(&b.kind)).unwrap_or_default(),
             bridging_interval: long(f.bridging.and_then(|b| b.interval)),
+            room_use_above: f
+                .loads
+                .room_use_above
+                .map(|r| enum_text(&r))
+                .unwrap_or_default(),
+            finishes: match f.loads.heavy_finish {
+                Some(true) => "heavy".into(),
+                Some(false) => "light".into(),
+                None => String::new(),
+            },
         }
     }
 
@@ -192,6 +207,21 @@ impl FramingForm {
         } else if interval.is_some() {
             fail("bridging", "pick the kind of bridging".into());
         }
+        if filled(&self.room_use_above) {
+            match enum_from::<RoomUse>(&self.room_use_above) {
+                Some(r) => framing.loads.room_use_above = Some(r),
+                None => fail(
+                    "room_use_above",
+                    format!("unknown room use \"{}\"", self.room_use_above.trim()),
+                ),
+            }
+        }
+        match self.finishes.trim() {
+            "" => {}
+            "heavy" => framing.loads.heavy_finish = Some(true),
+            "light" => framing.loads.heavy_finish = Some(false),
+            other => fail("finishes", format!("unknown finishes \"{other}\"")),
+        }
         (framing, errors)
     }
 
@@ -210,6 +240,8 @@ impl FramingForm {
             "end_restraint" => &mut self.end_restraint,
             "bridging" => &mut self.bridging,
             "bridging_interval" => &mut self.bridging_interval,
+            "room_use_above" => &mut self.room_use_above,
+            "finishes" => &mut self.finishes,
             _ => return,
         };
         *slot = value;
@@ -231,15 +263,21 @@ impl FramingForm {
                 "bearing_length" | "bearing_on" => framing.bearing = stored.bearing,
                 "end_restraint" => framing.end_restraint = stored.end_restraint,
                 "bridging" | "bridging_interval" => framing.bridging = stored.bridging,
+                "room_use_above" => framing.loads.room_use_above = stored.loads.room_use_above,
+                "finishes" => framing.loads.heavy_finish = stored.loads.heavy_finish,
                 _ => {}
             }
         }
+        // Loads the form does not show (a typed live or dead load from a file) are kept.
+        framing.loads.live_psf = stored.loads.live_psf;
+        framing.loads.dead_psf = stored.loads.dead_psf;
+        framing.loads.deflection = stored.loads.deflection;
         (framing, errors)
     }
 
     /// Fills every empty field from the previous run's form (one tap: "same as before").
     pub fn fill_from(&mut self, previous: &FramingForm) {
-        let pairs: [(&mut String, &String); 12] = [
+        let pairs: [(&mut String, &String); 14] = [
             (&mut self.kind, &previous.kind),
             (&mut self.species, &previous.species),
             (&mut self.grade, &previous.grade),
@@ -252,6 +290,8 @@ impl FramingForm {
             (&mut self.end_restraint, &previous.end_restraint),
             (&mut self.bridging, &previous.bridging),
             (&mut self.bridging_interval, &previous.bridging_interval),
+            (&mut self.room_use_above, &previous.room_use_above),
+            (&mut self.finishes, &previous.finishes),
         ];
         for (mine, theirs) in pairs {
             if mine.trim().is_empty() {
@@ -374,5 +414,28 @@ mod tests {
         next.fill_from(&typed());
         assert_eq!(next.species, "SPF");
         assert_eq!(next.clear_span, "12' 6\"", "what was typed stays");
+    }
+
+    // Source: IRC 2018 Table R301.5 (40 psf for rooms other than sleeping rooms): a family
+    // room run in a sleeping-room area is set to "other rooms" on the run; a typed live load
+    // from a file, which the form does not show, survives a field edit.
+    #[test]
+    fn a_run_can_say_its_room_and_finishes() {
+        let mut form = typed();
+        form.set("room_use_above", "living".into());
+        form.set("finishes", "heavy".into());
+        let (framing, errors) = form.to_framing(UnitSystem::Imperial);
+        assert!(errors.is_empty(), "{errors:?}");
+        assert_eq!(framing.loads.room_use_above, Some(RoomUse::Living));
+        assert_eq!(framing.loads.heavy_finish, Some(true));
+        let back = FramingForm::from_framing(&framing, UnitSystem::Imperial);
+        assert_eq!(
+            (back.room_use_above.as_str(), back.finishes.as_str()),
+            ("living", "heavy")
+        );
+        let mut stored = framing.clone();
+        stored.loads.live_psf = Some(50.0);
+        let (merged, _) = back.merged_with(&stored, UnitSystem::Imperial);
+        assert_eq!(merged.loads.live_psf, Some(50.0));
     }
 }

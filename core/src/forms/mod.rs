@@ -11,5 +11,7 @@ mod preview;
 pub use framing_form::{FieldError, FramingForm};
 pub use live_check::{live_check, LiveCheck};
 pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};
-pub use picks::{BRIDGING, END_RESTRAINTS, GRADES, MEMBER_KINDS, SIZES, SPECIES};
+pub use picks::{
+    BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS, ROOM_USES, SIZES, SPECIES,
+};
 pub use preview::{preview_observation, side_view_of, side_view_with};

@@ -54,6 +54,18 @@ pub const BRIDGING: &[(&str, &str)] = &[
     ("strap", "1x3 strip across the bottom edges"),
 ];
 
+/// The room above a run or member, where it differs from its area's (Table R301.5).
+pub const ROOM_USES: &[(&str, &str)] = &[
+    ("sleeping", "Sleeping rooms (30 psf)"),
+    ("living", "Other rooms (40 psf)"),
+];
+
+/// The finishes above, where they differ from the area's (10 or 20 psf dead load).
+pub const FINISHES: &[(&str, &str)] = &[
+    ("light", "Light finishes (10 psf)"),
+    ("heavy", "Tile, stone or mortar bed (20 psf)"),
+];
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -62,7 +74,7 @@ mod tests {
 
     #[test]
     fn every_pick_reads_back_without_an_error() {
-        let lists: [(&str, &[(&str, &str)]); 7] = [
+        let lists: [(&str, &[(&str, &str)]); 9] = [
             ("kind", MEMBER_KINDS),
             ("species", SPECIES),
             ("grade", GRADES),
@@ -70,6 +82,8 @@ mod tests {
             ("end_restraint", END_RESTRAINTS),
             ("bridging", BRIDGING),
             ("bearing_on", SUPPORTS),
+            ("room_use_above", ROOM_USES),
+            ("finishes", FINISHES),
         ];
         for (field, picks) in lists {
             for (value, _) in picks {

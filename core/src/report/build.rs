@@ -154,9 +154,14 @@ fn summary(
     evaluation: &Evaluation,
     notes: &HashMap<&str, &FindingNote>,
 ) -> Summary {
+    // The group's title says the status; the left column holds the use of the limit, or a
+    // short word where there is no ratio.
     let line = |f: &Finding| SummaryLine {
         use_text: match (f.status, f.use_text()) {
             (Status::OverLimit | Status::NearLimit, Some(u)) => u,
+            (Status::OverLimit, None) => "over".into(),
+            (Status::ToEvaluate, _) => "evaluate".into(),
+            (Status::Incomplete, _) => "partial".into(),
             _ => f.status_label().to_string(),
         },
         text: format!("{}: {}", f.title(), f.summary()),

@@ -205,7 +205,8 @@ impl Wording for BearingDetail {
         }
         if let Some((lb, required, _)) = self.reaction {
             text.push_str(&format!(
-                "; the reaction of {lb:.0} lb needs {}",
+                "; the reaction of {} needs {}",
+                crate::finding::Value::Pounds(lb).text(u),
                 dim_min(u, required)
             ));
         }
@@ -214,7 +215,7 @@ impl Wording for BearingDetail {
 
     fn assumptions(&self, _: UnitSystem) -> Vec<String> {
         match (self.minimum, self.reaction) {
-            (None, _) => vec!["The hanger, ribbon or ledger and its nailing were not evaluated for capacity".into()],
+            (None, _) => vec![format!("The {} and its nailing were not evaluated for capacity", self.on.name())],
             (Some(_), Some((_, _, fc_perp))) => vec![format!(
                 "Reaction = total load x clear span / 2; Fc-perp' {fc_perp:.0} psi over the joist thickness, bearing area factor Cb taken as 1.0"
             )],
@@ -224,6 +225,7 @@ impl Wording for BearingDetail {
 
     fn recommendation(&self, status: Status, _: UnitSystem) -> String {
         match (self.minimum, status) {
+            (None, _) if self.on == BearingSupport::Ribbon => "Confirm the ribbon is let into the studs and each joist is nailed to the stud beside it.".into(),
             (None, _) => "Confirm hangers are the right size for the joist and every nail hole is filled.".into(),
             (_, Status::OverLimit) => "Short bearing: have the joist ends supported (a full-bearing ledger, post, or hanger) as a licensed professional directs.".into(),
             (_, Status::NearLimit) => "Bearing is close to the minimum; look for crushing or movement at the ends.".into(),

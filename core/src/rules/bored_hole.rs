@@ -1,7 +1,7 @@
 //! Bored holes in sawn lumber joists (IRC R502.8.1): diameter, distance from the edges, from
 //! other holes and from notches.
 
-use super::shared::{dim, dim_max, len};
+use super::shared::{dim, dim_max, dim_min, len};
 use super::Detail;
 use crate::finding::{
     Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
@@ -148,7 +148,7 @@ impl Wording for HoleDetail {
             dim(u, self.centre_above_bottom),
             dim(u, self.member_depth),
             dim_max(u, self.member_depth * MAX_DIAMETER),
-            dim(u, MIN_CLEARANCE)
+            dim_min(u, MIN_CLEARANCE)
         )
     }
 

@@ -99,9 +99,9 @@ impl Wording for BridgingDetail {
         vec!["Joist ends count as braced (R502.7 end restraint)".into()]
     }
 
-    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+    fn recommendation(&self, status: Status, u: UnitSystem) -> String {
         match status {
-            Status::OverLimit => "Add solid blocking, diagonal bridging or a continuous 1x3 strip across the bottom edges so no interval exceeds 8 ft.".into(),
+            Status::OverLimit => format!("Add solid blocking, diagonal bridging or a continuous 1x3 strip across the bottom edges so no interval exceeds {}.", len(u, MAX_INTERVAL)),
             _ => "Bridging interval meets the limit.".into(),
         }
     }

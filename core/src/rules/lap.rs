@@ -1,7 +1,7 @@
 //! Joists lapped over a support: at least 3 in of lap and three 10d face nails, or a splice of
 //! equal strength (IRC R502.6.1).
 
-use super::shared::dim;
+use super::shared::{dim, dim_min};
 use super::Detail;
 use crate::finding::{
     Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
@@ -96,11 +96,12 @@ impl Wording for LapDetail {
             return "Joists spliced over the support instead of lapped".into();
         }
         format!(
-            "Lap over the support: {}, {} nails; minimum {} and {}",
+            "Lap over the support: {}, {}; minimum {} and {} nails",
             self.length
                 .map_or("length not measured".into(), |l| dim(u, l)),
-            self.nails.map_or("?".into(), |n| n.to_string()),
-            dim(u, MIN_LAP),
+            self.nails
+                .map_or("nails not counted".into(), |n| format!("{n} nails")),
+            dim_min(u, MIN_LAP),
             MIN_NAILS
         )
     }
@@ -113,10 +114,10 @@ impl Wording for LapDetail {
         }
     }
 
-    fn recommendation(&self, status: Status, _: UnitSystem) -> String {
+    fn recommendation(&self, status: Status, u: UnitSystem) -> String {
         match status {
-            _ if self.spliced => "Confirm the splice is of equal strength to a 3 in lap with three 10d nails.".into(),
-            Status::OverLimit => "Lengthen the lap or add nails (at least 3 in of lap and three 10d face nails), or add a splice of equal strength.".into(),
+            _ if self.spliced => format!("Confirm the splice is of equal strength to a {} lap with three 10d nails.", dim(u, MIN_LAP)),
+            Status::OverLimit => format!("Lengthen the lap or add nails (at least {} of lap and three 10d face nails), or add a splice of equal strength.", dim(u, MIN_LAP)),
             Status::NotChecked | Status::Incomplete => "Measure the lap and count the nails.".into(),
             _ => "Lap meets the minimum.".into(),
         }

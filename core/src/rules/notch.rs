@@ -155,7 +155,8 @@ impl Wording for NotchDetail {
                 "Notch {} deep x {} long in the {edge} edge, {} from the support, in a {} deep joist; limits d/6 = {} deep, d/3 = {} long, outside the middle third",
                 dim(u, self.depth),
                 dim(u, self.length),
-                self.from_support.map_or("?".to_string(), |f| len(u, f)),
+                self.from_support
+                    .map_or("distance not entered".to_string(), |f| len(u, f)),
                 dim(u, d),
                 dim_max(u, d * SPAN_NOTCH_DEPTH),
                 dim_max(u, d * NOTCH_LENGTH)

@@ -1,7 +1,7 @@
 //! Sag read along a line between the bearings, compared with the L/360 floor reference of
 //! IRC Table R301.7, worded for what it is: a reference, not a limit on long-term sag.
 
-use super::shared::{dim, len};
+use super::shared::{dim, dim_max, len};
 use super::Detail;
 use crate::finding::{
     Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
@@ -122,7 +122,7 @@ impl Wording for SagDetail {
             dim(u, self.sag.largest),
             len(u, self.sag.at),
             self.denominator,
-            dim(u, self.span / self.denominator),
+            dim_max(u, self.span / self.denominator),
             len(u, self.span)
         )
     }
