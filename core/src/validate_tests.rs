@@ -79,6 +79,8 @@ fn a_taped_spacing_is_held_to_its_layout() {
     assert_eq!(layout_of(inches(24.5)), Some(24.0));
     assert_eq!(layout_of(inches(19.5)), Some(19.2));
     assert_eq!(layout_of(inches(15.25)), Some(16.0));
+    assert_eq!(layout_of(inches(24.75)), Some(24.0));
+    assert_eq!(layout_of(inches(24.8)), None);
     assert_eq!(layout_of(inches(28.0)), None);
     let mut framing = spf_no2((2, 12), 160.0);
     framing.spacing = Some(inches(24.5));

@@ -277,6 +277,48 @@ mod tests {
         }
     }
 
+    // Source: IRC 2018 R502.3 and Tables R502.3.1(1)/(2): 2x6 to 2x12 at 12, 16, 19.2 or
+    // 24 in, 30 or 40 psf live with 10 or 20 psf dead, L/360, dry. Anything else is computed
+    // by NDS mechanics as an engineering reference, and says so.
+    #[test]
+    fn spans_outside_the_printed_tables_are_a_reference() {
+        let basis_of = |framing: crate::model::Framing, loads: crate::model::LoadSettings| {
+            let i = inspection(framing, vec![], loads);
+            let (ctxs, _) = crate::validate::members(&i);
+            let mut out = Vec::new();
+            check(&ctxs[0], &mut out);
+            (out[0].basis, outside_tables(&ctxs[0]))
+        };
+        let plain = Default::default();
+        assert_eq!(
+            basis_of(spf_no2((2, 10), 150.0), plain),
+            (Basis::CodeLimit, vec![])
+        );
+        assert_eq!(basis_of(spf_no2((2, 12), 150.0), plain).0, Basis::CodeLimit);
+        let (basis, why) = basis_of(spf_no2((2, 14), 150.0), plain);
+        assert_eq!(
+            (basis, why),
+            (Basis::Reference, vec!["joists deeper than 2x12"])
+        );
+        let mut wide = spf_no2((2, 10), 150.0);
+        wide.spacing = Some(inches(32.0));
+        assert_eq!(
+            basis_of(wide, plain).1,
+            vec!["a spacing other than 12, 16, 19.2 or 24 in"]
+        );
+        let fifty = crate::model::LoadSettings {
+            live_psf: Some(50.0),
+            ..Default::default()
+        };
+        assert_eq!(
+            basis_of(spf_no2((2, 10), 150.0), fifty).1,
+            vec!["a live load other than 30 or 40 psf"]
+        );
+        let mut thick = spf_no2((4, 10), 150.0);
+        thick.spacing = Some(inches(16.0));
+        assert_eq!(basis_of(thick, plain).0, Basis::Reference);
+    }
+
     #[test]
     fn missing_values_are_named() {
         let mut framing = spf_no2((2, 10), 180.0);
