@@ -24,6 +24,8 @@ pub enum InterchangeError {
     TooNew(u32),
     #[error("id \"{0}\" is used more than once")]
     DuplicateId(String),
+    #[error("{0} has an empty id")]
+    EmptyId(String),
 }
 
 pub type Result<T> = std::result::Result<T, InterchangeError>;
@@ -65,6 +67,10 @@ pub fn from_json(text: &str) -> Result<Inspection> {
     if inspection.version > FORMAT_VERSION {
         return Err(InterchangeError::TooNew(inspection.version));
     }
+    crate::model::check_date(&inspection.date).map_err(|message| InterchangeError::Field {
+        path: "date".into(),
+        message,
+    })?;
     check_ids(&inspection)?;
     Ok(inspection)
 }
@@ -75,9 +81,16 @@ pub fn to_json(inspection: &Inspection) -> String {
 }
 
 fn check_ids(inspection: &Inspection) -> Result<()> {
+    if inspection.id.trim().is_empty() {
+        return Err(InterchangeError::EmptyId("the inspection".into()));
+    }
     let mut seen = HashSet::new();
     let mut add = |id: &str| {
-        if seen.insert(id.to_string()) {
+        if id.trim().is_empty() {
+            Err(InterchangeError::EmptyId(
+                "an area, run, joist, member, observation or photo".into(),
+            ))
+        } else if seen.insert(id.to_string()) {
             Ok(())
         } else {
             Err(InterchangeError::DuplicateId(id.to_string()))
@@ -135,6 +148,26 @@ mod tests {
         assert!(
             err.starts_with("at areas[0].members[0].framing.species: unknown species \"oak\""),
             "{err}"
+        );
+    }
+
+    #[test]
+    fn dates_and_ids_are_checked() {
+        let with = |date: &str, id: &str| {
+            MINIMAL
+                .replace("2026-12-01", date)
+                .replace(r#""id":"i1""#, &format!(r#""id":"{id}""#))
+        };
+        assert!(from_json(&with("2026-12-01", "i1")).is_ok());
+        for date in ["2026-02-30", "yesterday"] {
+            match from_json(&with(date, "i1")) {
+                Err(InterchangeError::Field { path, .. }) => assert_eq!(path, "date"),
+                other => panic!("{date}: {other:?}"),
+            }
+        }
+        assert_eq!(
+            from_json(&with("2026-12-01", " ")),
+            Err(InterchangeError::EmptyId("the inspection".into()))
         );
     }
 

@@ -139,6 +139,44 @@ impl MemberContext<'_> {
     }
 }
 
+/// Photo references that cannot be what was meant: attached to nothing in the inspection, or
+/// naming a file outside it (an absolute path or `..`).
+fn photo_problems(inspection: &Inspection) -> Vec<Problem> {
+    let owners: std::collections::HashSet<&str> = crate::model::renumber::ids_of(inspection)
+        .into_iter()
+        .skip(1)
+        .collect();
+    let mut out = Vec::new();
+    for p in &inspection.photos {
+        let location = format!("Photo {}", p.id);
+        if !owners.contains(p.attached_to.as_str()) {
+            out.push(Problem {
+                location: location.clone(),
+                message: format!(
+                    "attached to \"{}\", which is no area, run, member or observation of this inspection; not shown",
+                    p.attached_to
+                ),
+            });
+        }
+        let file = std::path::Path::new(&p.file);
+        if file.is_absolute()
+            || p.file.contains('\\')
+            || file
+                .components()
+                .any(|c| !matches!(c, std::path::Component::Normal(_)))
+        {
+            out.push(Problem {
+                location,
+                message: format!(
+                    "its file \"{}\" is outside the inspection's folder; not used",
+                    p.file
+                ),
+            });
+        }
+    }
+    out
+}
+
 /// Validates every member of the inspection.
 pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>) {
     let mut out = Vec::new();
@@ -151,6 +189,7 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
             message,
         });
     }
+    problems.extend(photo_problems(inspection));
     for area in &inspection.areas {
         let (area_loads, notes) = area.loads.usable();
         for message in notes {

@@ -188,3 +188,23 @@ fn loads_can_be_set_on_a_run() {
     assert_eq!(ctxs[0].loads.live, Psf(40.0));
     assert_eq!(ctxs[1].loads.live, Psf(40.0), "its joists too");
 }
+
+#[test]
+fn photo_references_outside_the_inspection_are_problems() {
+    let mut i = inspection(spf_no2((2, 10), 180.0), vec![], LoadSettings::default());
+    let photo = |id: &str, file: &str, owner: &str| crate::model::PhotoRef {
+        id: id.into(),
+        file: file.into(),
+        attached_to: owner.into(),
+        caption: String::new(),
+    };
+    i.photos = vec![
+        photo("p1", "photos/a.jpg", "m"),
+        photo("p2", "/etc/passwd", "m"),
+        photo("p3", "../../secret.jpg", "m"),
+        photo("p4", "photos/b.jpg", "nobody"),
+    ];
+    let (_, problems) = members(&i);
+    let named: Vec<&str> = problems.iter().map(|p| p.location.as_str()).collect();
+    assert_eq!(named, ["Photo p2", "Photo p3", "Photo p4"], "{problems:?}");
+}

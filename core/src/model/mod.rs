@@ -1,11 +1,14 @@
 //! The inspection as entered: people, areas, joist runs, single members, observations, photos.
 //! This is also the JSON interchange format (see `docs/inspection-format.md`).
 
+mod date;
 mod framing;
 mod inspection;
 mod load;
 mod observation;
+pub mod renumber;
 
+pub use date::check_date;
 pub use framing::{
     ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
 };

@@ -5,14 +5,14 @@
 //! replaces an inspection with the same id rather than duplicating it.
 
 use super::clock::now_utc;
-use super::files::{is_hash, write_durably, Kind, PhotoFiles};
+use super::files::{content_hash, is_hash, write_durably, Kind, PhotoFiles};
 use super::notes::FindingNote;
 use super::save;
 use super::{Result, Store, StoreError};
 use crate::interchange;
-use crate::model::Inspection;
+use crate::model::{renumber, Inspection};
 use crate::photo::{self, sniff, SourceFormat};
-use std::collections::HashMap;
+use std::collections::HashSet;
 use std::io::{Read, Write};
 use std::path::Path;
 use thiserror::Error;
@@ -46,6 +46,10 @@ pub enum BundleError {
     Inspection(#[from] interchange::InterchangeError),
     #[error("entry \"{0}\": {1}")]
     BadEntry(String, String),
+    #[error("entry \"{0}\" appears twice (refused: which one would be kept is not for the bundle to decide)")]
+    Duplicate(String),
+    #[error("entry \"{0}\" does not hold the photo its name promises (its SHA-256 differs); refused: it could pass off one picture as another")]
+    HashMismatch(String),
 }
 
 /// What an import did.
@@ -58,7 +62,7 @@ pub struct ImportOutcome {
 }
 
 /// One entry's place in a bundle.
-#[derive(Debug, Clone, PartialEq)]
+#[derive(Debug, Clone, PartialEq, Eq, Hash)]
 enum Entry {
     Inspection,
     Notes,
@@ -89,6 +93,7 @@ impl Store {
     /// Puts an inspection read from an interchange file into the store (replacing one with the
     /// same id). Photo references keep their file names; their images come with a bundle.
     pub fn import_inspection(&mut self, inspection: &Inspection) -> Result<ImportOutcome> {
+        self.refuse_foreign_ids(inspection)?;
         self.replace(inspection, &[])
     }
 
@@ -137,24 +142,124 @@ impl Store {
         Ok(())
     }
 
-    /// Reads a bundle into the store. Everything is checked before anything is written.
+    /// Reads a bundle into the store (replacing an inspection with the same id).
     pub fn import_bundle(
         &mut self,
         path: &Path,
     ) -> std::result::Result<ImportOutcome, ImportError> {
+        self.import_bundle_with(path, false)
+    }
+
+    /// Reads a bundle into the store; with `as_copy`, every id is made new so the copy sits
+    /// beside an inspection that holds the same ids. Every name, size and photo hash is
+    /// checked before anything is written; report images and thumbnails are made again from
+    /// the verified originals (a bundle's own are not trusted), and only one entry is in
+    /// memory at a time.
+    pub fn import_bundle_with(
+        &mut self,
+        path: &Path,
+        as_copy: bool,
+    ) -> std::result::Result<ImportOutcome, ImportError> {
         let file = std::fs::File::open(path).map_err(StoreError::from)?;
-        let contents = read_bundle(file)?;
-        for (kind, hash, ext, bytes) in &contents.images {
-            self.photos
-                .put(*kind, hash, ext, bytes)
-                .map_err(StoreError::from)?;
+        let mut zip =
+            zip::ZipArchive::new(file).map_err(|e| BundleError::NotAZip(e.to_string()))?;
+        let survey = survey(&mut zip)?;
+        // Every original must be what its name says before anything is written.
+        for image in survey.images.iter().filter(|i| i.kind == Kind::Original) {
+            let bytes = read_entry(&mut zip, image.index, &image.name)?;
+            if content_hash(&bytes) != image.hash {
+                return Err(BundleError::HashMismatch(image.name.clone()).into());
+            }
         }
-        Ok(self.replace(&contents.inspection, &contents.notes)?)
+        let (mut inspection, mut notes) = (survey.inspection, survey.notes);
+        if as_copy {
+            let (copy, map) = renumber::renumbered(&inspection, super::new_id);
+            for note in &mut notes {
+                note.key = renumber::renumbered_key(&note.key, &map);
+            }
+            inspection = copy;
+        } else {
+            self.refuse_foreign_ids(&inspection)?;
+        }
+        let originals: HashSet<&str> = survey
+            .images
+            .iter()
+            .filter(|i| i.kind == Kind::Original)
+            .map(|i| i.hash.as_str())
+            .collect();
+        for image in &survey.images {
+            let bytes = read_entry(&mut zip, image.index, &image.name)?;
+            let bad = |e: crate::photo::PhotoError| {
+                ImportError::from(BundleError::BadEntry(image.name.clone(), e.to_string()))
+            };
+            match image.kind {
+                Kind::Original => {
+                    let made = photo::process(&bytes).map_err(bad)?;
+                    let put =
+                        |kind, jpeg: &[u8]| self.photos.replace(kind, &image.hash, "jpg", jpeg);
+                    put(Kind::Report, &made.report_jpeg).map_err(StoreError::from)?;
+                    put(Kind::Thumb, &made.thumb_jpeg).map_err(StoreError::from)?;
+                    self.photos
+                        .put(Kind::Original, &image.hash, image.ext, &bytes)
+                        .map_err(StoreError::from)?;
+                }
+                // Without its original a report image cannot be verified: it is made again
+                // (upright, resized, no metadata) and never replaces an image already here.
+                Kind::Report if !originals.contains(image.hash.as_str()) => {
+                    let made = photo::process(&bytes).map_err(bad)?;
+                    self.photos
+                        .put(Kind::Report, &image.hash, "jpg", &made.report_jpeg)
+                        .map_err(StoreError::from)?;
+                    self.photos
+                        .put(Kind::Thumb, &image.hash, "jpg", &made.thumb_jpeg)
+                        .map_err(StoreError::from)?;
+                }
+                // Thumbnails are always made from the report image or the original.
+                Kind::Report | Kind::Thumb => {}
+            }
+        }
+        Ok(self.replace(&inspection, &notes)?)
+    }
+
+    /// Refuses an inspection some of whose inner ids belong to another stored inspection,
+    /// naming it (replacing would take them from it).
+    fn refuse_foreign_ids(&self, inspection: &Inspection) -> Result<()> {
+        for id in renumber::ids_of(inspection).into_iter().skip(1) {
+            match self.inspection_of(id) {
+                Ok(other) if other != inspection.id => {
+                    let address: String = self
+                        .conn
+                        .query_row(
+                            "SELECT address FROM inspections WHERE id = ?1",
+                            [&other],
+                            |r| r.get(0),
+                        )
+                        .unwrap_or_default();
+                    return Err(StoreError::IdsTaken {
+                        id: id.to_string(),
+                        other,
+                        address,
+                    });
+                }
+                Ok(_) | Err(StoreError::NotFound(_)) => {}
+                Err(e) => return Err(e),
+            }
+        }
+        Ok(())
+    }
+
+    /// Puts an inspection file into the store as a copy: every id new, so it sits beside
+    /// an inspection holding the same ids.
+    pub fn import_inspection_copy(&mut self, inspection: &Inspection) -> Result<ImportOutcome> {
+        let (copy, _) = renumber::renumbered(inspection, super::new_id);
+        self.replace(&copy, &[])
     }
 
     /// Replaces (or creates) the inspection with this id, in one transaction.
     fn replace(&mut self, inspection: &Inspection, notes: &[FindingNote]) -> Result<ImportOutcome> {
-        let tx = self.conn.transaction()?;
+        let tx = self
+            .conn
+            .transaction_with_behavior(rusqlite::TransactionBehavior::Immediate)?;
         let created: Option<String> = rusqlite::OptionalExtension::optional(tx.query_row(
             "SELECT created_at FROM inspections WHERE id = ?1",
             [&inspection.id],
@@ -230,78 +335,110 @@ pub enum ImportError {
     Store(#[from] StoreError),
 }
 
-struct BundleContents {
-    inspection: Inspection,
-    notes: Vec<FindingNote>,
-    images: Vec<(Kind, String, &'static str, Vec<u8>)>,
+/// One image entry of a bundle, located and named.
+struct ImageEntry {
+    index: usize,
+    name: String,
+    kind: Kind,
+    hash: String,
+    ext: &'static str,
 }
 
-/// Reads and checks every entry; nothing is written.
-fn read_bundle(file: std::fs::File) -> std::result::Result<BundleContents, BundleError> {
-    let mut zip = zip::ZipArchive::new(file).map_err(|e| BundleError::NotAZip(e.to_string()))?;
+/// A bundle's entries checked by name and declared size, its inspection and notes read.
+struct Survey {
+    inspection: Inspection,
+    notes: Vec<FindingNote>,
+    images: Vec<ImageEntry>,
+}
+
+/// Checks every entry's name (no duplicates, nothing outside the bundle's own names) and
+/// declared size, and reads the inspection and notes; image bytes are not read here.
+fn survey<R: Read + std::io::Seek>(
+    zip: &mut zip::ZipArchive<R>,
+) -> std::result::Result<Survey, BundleError> {
     if zip.len() > MAX_ENTRIES {
         return Err(BundleError::TooManyEntries(zip.len()));
     }
     let mut total = 0u64;
-    let mut inspection = None;
-    let mut notes = Vec::new();
-    let mut images: HashMap<(String, &'static str), Vec<u8>> = HashMap::new();
-    let mut kinds = Vec::new();
+    let mut seen = HashSet::new();
+    let mut images_seen = HashSet::new();
+    let (mut inspection, mut notes, mut images) = (None, Vec::new(), Vec::new());
     for index in 0..zip.len() {
-        let mut entry = zip
-            .by_index(index)
-            .map_err(|e| BundleError::NotAZip(e.to_string()))?;
-        let name = entry.name().to_string();
-        if entry.is_dir() {
+        let (name, size, is_dir) = {
+            let entry = zip
+                .by_index_raw(index)
+                .map_err(|e| BundleError::NotAZip(e.to_string()))?;
+            (entry.name().to_string(), entry.size(), entry.is_dir())
+        };
+        if is_dir {
             continue;
+        }
+        if !seen.insert(name.clone()) {
+            return Err(BundleError::Duplicate(name));
         }
         let Some(place) = classify(&name) else {
             return Err(BundleError::BadName(name));
         };
-        if entry.size() > MAX_ENTRY_BYTES {
+        if size > MAX_ENTRY_BYTES {
             return Err(BundleError::TooBig(name));
         }
-        // Read at most the limit + 1 byte, whatever the header claims (a lying header or a
-        // deflate bomb stops there).
-        let mut bytes = Vec::new();
-        (&mut entry)
-            .take(MAX_ENTRY_BYTES + 1)
-            .read_to_end(&mut bytes)
-            .map_err(|e| BundleError::BadEntry(name.clone(), e.to_string()))?;
-        if bytes.len() as u64 > MAX_ENTRY_BYTES {
-            return Err(BundleError::TooBig(name));
-        }
-        total += bytes.len() as u64;
+        total += size;
         if total > MAX_TOTAL_BYTES {
             return Err(BundleError::TooBigInAll);
         }
         match place {
-            Entry::Inspection => inspection = Some(interchange::from_json_bytes(&bytes)?),
+            Entry::Inspection => {
+                let bytes = read_entry(zip, index, &name)?;
+                inspection = Some(interchange::from_json_bytes(&bytes)?);
+            }
             Entry::Notes => {
+                let bytes = read_entry(zip, index, &name)?;
                 notes = serde_json::from_slice(&bytes)
-                    .map_err(|e| BundleError::BadEntry(name.clone(), e.to_string()))?
+                    .map_err(|e| BundleError::BadEntry(name.clone(), e.to_string()))?;
             }
             Entry::Image(kind, hash, ext) => {
-                check_image(kind, &bytes).map_err(|e| BundleError::BadEntry(name.clone(), e))?;
-                kinds.push((kind, hash.clone(), ext));
-                images.insert((format!("{kind:?}/{hash}"), ext), bytes);
+                if !images_seen.insert((kind, hash.clone())) {
+                    return Err(BundleError::Duplicate(name));
+                }
+                images.push(ImageEntry {
+                    index,
+                    name,
+                    kind,
+                    hash,
+                    ext,
+                });
             }
         }
     }
-    let inspection = inspection.ok_or(BundleError::NoInspection)?;
-    let images = kinds
-        .into_iter()
-        .filter_map(|(kind, hash, ext)| {
-            images
-                .remove(&(format!("{kind:?}/{hash}"), ext))
-                .map(|b| (kind, hash, ext, b))
-        })
-        .collect();
-    Ok(BundleContents {
-        inspection,
+    Ok(Survey {
+        inspection: inspection.ok_or(BundleError::NoInspection)?,
         notes,
         images,
     })
+}
+
+/// One entry's bytes, read at most to the limit + 1 byte whatever its header claims (a lying
+/// header or a deflate bomb stops there), and checked as the kind of entry it is.
+fn read_entry<R: Read + std::io::Seek>(
+    zip: &mut zip::ZipArchive<R>,
+    index: usize,
+    name: &str,
+) -> std::result::Result<Vec<u8>, BundleError> {
+    let mut entry = zip
+        .by_index(index)
+        .map_err(|e| BundleError::BadEntry(name.into(), e.to_string()))?;
+    let mut bytes = Vec::new();
+    (&mut entry)
+        .take(MAX_ENTRY_BYTES + 1)
+        .read_to_end(&mut bytes)
+        .map_err(|e| BundleError::BadEntry(name.into(), e.to_string()))?;
+    if bytes.len() as u64 > MAX_ENTRY_BYTES {
+        return Err(BundleError::TooBig(name.into()));
+    }
+    if let Some(Entry::Image(kind, _, _)) = classify(name) {
+        check_image(kind, &bytes).map_err(|e| BundleError::BadEntry(name.into(), e))?;
+    }
+    Ok(bytes)
 }
 
 /// Report images and thumbnails must be JPEGs within the size limits; originals JPEG or PNG.

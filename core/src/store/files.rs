@@ -5,9 +5,15 @@ use std::collections::HashSet;
 use std::fs::{self, File};
 use std::io::Write;
 use std::path::{Path, PathBuf};
+use std::time::{Duration, SystemTime};
+
+/// A photo file (or a temporary file) younger than this is never swept: a writer in another
+/// process may have written it and not yet committed its row. A write takes well under a
+/// second; an hour leaves room for a paused or slow process. Common practice, no source.
+pub const SWEEP_GRACE: Duration = Duration::from_secs(60 * 60);
 
 /// The three images of a photo.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
 pub enum Kind {
     /// The report-size JPEG.
     Report,
@@ -49,31 +55,63 @@ impl PhotoFiles {
         self.root.join(kind.folder()).join(format!("{hash}.{ext}"))
     }
 
-    /// Writes the file durably unless it is already there (same hash, same bytes).
+    /// Writes the file durably unless it is already there (same hash, same bytes). A file
+    /// already there has its time renewed, so that a sweep in another process leaves it for
+    /// the grace period while this writer commits its row.
     pub fn put(&self, kind: Kind, hash: &str, ext: &str, bytes: &[u8]) -> std::io::Result<PathBuf> {
         let path = self.path(kind, hash, ext);
-        if path.exists() {
+        if path.exists() && renew(&path).is_ok() {
             return Ok(path);
         }
         write_durably(&path, bytes)?;
         Ok(path)
     }
 
+    /// Writes the file durably, replacing what is there (an image re-made from a verified
+    /// original replaces one of unknown origin).
+    pub fn replace(
+        &self,
+        kind: Kind,
+        hash: &str,
+        ext: &str,
+        bytes: &[u8],
+    ) -> std::io::Result<PathBuf> {
+        let path = self.path(kind, hash, ext);
+        write_durably(&path, bytes)?;
+        Ok(path)
+    }
+
     /// Removes every file whose hash is not in `keep`, and any temporary file left by a
-    /// killed write. Returns how many files were removed.
-    pub fn sweep(&self, keep: &HashSet<String>) -> std::io::Result<usize> {
+    /// killed write, but only once older than `grace`: a younger file may belong to a row
+    /// that a writer in another process has not committed yet. Returns how many were removed.
+    pub fn sweep(&self, keep: &HashSet<String>, grace: Duration) -> std::io::Result<usize> {
         let mut removed = 0;
+        let now = SystemTime::now();
         for kind in Kind::ALL {
             for entry in fs::read_dir(self.root.join(kind.folder()))? {
-                let path = entry?.path();
+                let entry = entry?;
+                let path = entry.path();
                 let name = path
                     .file_name()
                     .and_then(|n| n.to_str())
                     .unwrap_or_default();
                 let hash = name.split('.').next().unwrap_or_default();
-                if name.contains(".tmp") || !keep.contains(hash) {
-                    fs::remove_file(&path)?;
-                    removed += 1;
+                if !name.contains(".tmp") && keep.contains(hash) {
+                    continue;
+                }
+                let age = entry
+                    .metadata()
+                    .and_then(|m| m.modified())
+                    .ok()
+                    .and_then(|t| now.duration_since(t).ok());
+                // A file whose age cannot be read, or from the future, is left alone.
+                if age.is_some_and(|a| a >= grace) {
+                    match fs::remove_file(&path) {
+                        Ok(()) => removed += 1,
+                        // Another process's sweep got there first.
+                        Err(e) if e.kind() == std::io::ErrorKind::NotFound => {}
+                        Err(e) => return Err(e),
+                    }
                 }
             }
         }
@@ -81,20 +119,37 @@ impl PhotoFiles {
     }
 }
 
-/// Write to `<name>.tmp-<pid>`, fsync, rename over `path`, fsync the folder.
+/// Sets a file's modification time to now.
+fn renew(path: &Path) -> std::io::Result<()> {
+    File::options()
+        .append(true)
+        .open(path)?
+        .set_modified(SystemTime::now())
+}
+
+/// Write to `<name>.tmp-<pid>-<n>`, fsync, rename over `path`, fsync the folder: whoever
+/// reads `path` sees the old file or the whole new one, never a part. A bare file name
+/// (`report.pdf`) is in the current folder.
 pub fn write_durably(path: &Path, bytes: &[u8]) -> std::io::Result<()> {
+    static NEXT: std::sync::atomic::AtomicU64 = std::sync::atomic::AtomicU64::new(0);
     let name = path.file_name().and_then(|n| n.to_str()).unwrap_or("file");
-    let tmp = path.with_file_name(format!("{name}.tmp-{}", std::process::id()));
-    {
+    let n = NEXT.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+    let tmp = path.with_file_name(format!("{name}.tmp-{}-{n}", std::process::id()));
+    let written = (|| {
         let mut file = File::create(&tmp)?;
         file.write_all(bytes)?;
         file.sync_all()?;
+        fs::rename(&tmp, path)
+    })();
+    if let Err(e) = written {
+        let _ = fs::remove_file(&tmp);
+        return Err(e);
     }
-    fs::rename(&tmp, path)?;
-    if let Some(dir) = path.parent() {
-        File::open(dir)?.sync_all()?;
-    }
-    Ok(())
+    let dir = match path.parent() {
+        Some(d) if !d.as_os_str().is_empty() => d,
+        _ => Path::new("."),
+    };
+    File::open(dir)?.sync_all()
 }
 
 /// Lower-case hex SHA-256 of the bytes.
@@ -119,6 +174,22 @@ pub fn is_hash(text: &str) -> bool {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// A file another process wrote a moment ago is never swept, even with no row; once
+    /// older than the grace period it is.
+    #[test]
+    fn young_files_survive_the_sweep() {
+        let root = std::env::temp_dir().join(format!("undercroft-sweep-{}", std::process::id()));
+        let _ = fs::remove_dir_all(&root);
+        let files = PhotoFiles::new(root.clone()).unwrap();
+        let hash = content_hash(b"x");
+        let path = files.put(Kind::Report, &hash, "jpg", b"x").unwrap();
+        assert_eq!(files.sweep(&HashSet::new(), SWEEP_GRACE).unwrap(), 0);
+        assert!(path.exists());
+        assert_eq!(files.sweep(&HashSet::new(), Duration::ZERO).unwrap(), 1);
+        assert!(!path.exists());
+        fs::remove_dir_all(&root).unwrap();
+    }
 
     // Source: FIPS 180-4 test vector, SHA-256("abc").
     #[test]

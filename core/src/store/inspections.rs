@@ -47,6 +47,7 @@ impl Store {
         if new.date.trim().is_empty() {
             return Err(StoreError::Invalid("the inspection needs a date".into()));
         }
+        crate::model::check_date(new.date.trim()).map_err(StoreError::Invalid)?;
         let id = new_id();
         let now = now_utc();
         let loads = LoadSettings {

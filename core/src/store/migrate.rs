@@ -19,7 +19,52 @@ const MIGRATIONS: &[Migration] = &[
         sql: include_str!("../../../migrations/0002_notes_reports_search.sql"),
         after: Some(fill_search_keys),
     },
+    Migration {
+        sql: include_str!("../../../migrations/0003_application_id.sql"),
+        after: None,
+    },
 ];
+
+/// The `application_id` a store of ours carries from version 3 ("UNDC").
+pub const APPLICATION_ID: i64 = 1_431_192_643;
+
+/// Refuses a database that is not a store of ours: one with tables but no schema version
+/// (another program's), one with another program's application id, or one whose version
+/// says it is ours but has no inspections table. Reads only.
+pub fn check_ours(conn: &Connection) -> std::result::Result<(), String> {
+    let version: i64 = conn
+        .query_row("PRAGMA user_version", [], |r| r.get(0))
+        .map_err(|e| e.to_string())?;
+    let app_id: i64 = conn
+        .query_row("PRAGMA application_id", [], |r| r.get(0))
+        .map_err(|e| e.to_string())?;
+    let tables: Vec<String> = conn
+        .prepare("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name")
+        .and_then(|mut s| s.query_map([], |r| r.get(0))?.collect())
+        .map_err(|e| e.to_string())?;
+    let named = || {
+        let mut shown: Vec<&str> = tables.iter().take(5).map(String::as_str).collect();
+        if tables.len() > 5 {
+            shown.push("...");
+        }
+        shown.join(", ")
+    };
+    if app_id != 0 && app_id != APPLICATION_ID {
+        return Err(format!(
+            "it is another program's database (application id {app_id})"
+        ));
+    }
+    if version == 0 && !tables.is_empty() {
+        return Err(format!(
+            "it is another program's database (tables {})",
+            named()
+        ));
+    }
+    if version > 0 && !tables.iter().any(|t| t == "inspections") {
+        return Err(format!("it has no inspections table (tables {})", named()));
+    }
+    Ok(())
+}
 
 /// The schema version this code writes.
 pub const SCHEMA_VERSION: i64 = MIGRATIONS.len() as i64;
@@ -36,9 +81,14 @@ pub fn check_version(conn: &Connection) -> Result<()> {
     Ok(())
 }
 
-/// Applies every pending migration in one transaction.
+/// Applies every pending migration in one transaction, begun as a writer (so that two
+/// processes opening a new store take turns), and re-reads the version inside it.
 pub fn run(conn: &mut Connection) -> Result<()> {
-    let tx = conn.transaction()?;
+    let pending: i64 = conn.query_row("PRAGMA user_version", [], |r| r.get(0))?;
+    if pending >= SCHEMA_VERSION {
+        return check_version(conn);
+    }
+    let tx = conn.transaction_with_behavior(rusqlite::TransactionBehavior::Immediate)?;
     let found: i64 = tx.query_row("PRAGMA user_version", [], |r| r.get(0))?;
     if found > SCHEMA_VERSION {
         return Err(StoreError::TooNew {

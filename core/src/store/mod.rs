@@ -3,7 +3,7 @@
 
 mod bundle;
 mod clock;
-mod files;
+pub(crate) mod files;
 mod inspections;
 mod load;
 mod migrate;
@@ -15,8 +15,9 @@ mod tree;
 
 pub use bundle::{BundleError, ImportOutcome};
 pub use clock::now_utc;
+pub use files::write_durably;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
-pub use migrate::SCHEMA_VERSION;
+pub use migrate::{APPLICATION_ID, SCHEMA_VERSION};
 pub use notes::{DeliveredReport, FindingNote};
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
 pub use settings::{Screen, Settings};
@@ -31,6 +32,16 @@ pub enum StoreError {
     TooNew { found: i64, known: i64 },
     #[error("{0} is not an Undercroft database or is damaged: {1}")]
     NotADatabase(PathBuf, String),
+    #[error("{0} is not an Undercroft store: {1}. It was left untouched")]
+    NotOurs(PathBuf, String),
+    #[error("there is no store at {0}")]
+    NoStore(PathBuf),
+    #[error("the id {id} is already used by the stored inspection {other} ({address}); import it as a copy with new ids instead (`undercroft import --as-copy`)")]
+    IdsTaken {
+        id: String,
+        other: String,
+        address: String,
+    },
     #[error("no inspection, area, run, member, observation or photo with id {0}")]
     NotFound(String),
     #[error("{0}")]
@@ -72,10 +83,14 @@ impl Store {
         let bad =
             |e: rusqlite::Error| StoreError::NotADatabase(db_path.to_path_buf(), e.to_string());
         let mut conn = Connection::open(db_path).map_err(bad)?;
+        conn.busy_timeout(std::time::Duration::from_secs(BUSY_TIMEOUT_SECS))
+            .map_err(bad)?;
         migrate::check_version(&conn).map_err(|e| match e {
             StoreError::Sql(e) => bad(e),
             other => other,
         })?;
+        migrate::check_ours(&conn)
+            .map_err(|why| StoreError::NotOurs(db_path.to_path_buf(), why))?;
         configure(&conn).map_err(bad)?;
         migrate::run(&mut conn)?;
         let stem = db_path
@@ -90,6 +105,15 @@ impl Store {
         };
         store.sweep_orphans()?;
         Ok(store)
+    }
+
+    /// Opens a store that must already exist (for commands that only read): a missing path
+    /// is refused, not created.
+    pub fn open_existing(db_path: &Path) -> Result<Store> {
+        if !db_path.is_file() {
+            return Err(StoreError::NoStore(db_path.to_path_buf()));
+        }
+        Store::open(db_path)
     }
 
     /// The platform's data folder for the store (e.g. `~/.local/share/undercroft` on Linux).
@@ -129,13 +153,20 @@ impl Store {
 /// Per-connection settings. WAL with synchronous=FULL: every committed transaction is on
 /// disk (the WAL is synced at each commit) before the call returns, so an acknowledged edit
 /// survives a killed app or a power cut; NORMAL would only guard against corruption.
+/// The busy timeout comes first, so that switching to WAL waits for another process too;
+/// every transaction that writes begins IMMEDIATE (as a writer), so the timeout applies to
+/// it and two writers take turns instead of failing with "database is locked".
 fn configure(conn: &Connection) -> rusqlite::Result<()> {
+    conn.busy_timeout(std::time::Duration::from_secs(BUSY_TIMEOUT_SECS))?;
     conn.pragma_update(None, "journal_mode", "WAL")?;
     conn.pragma_update(None, "synchronous", "FULL")?;
     conn.pragma_update(None, "foreign_keys", "ON")?;
-    conn.busy_timeout(std::time::Duration::from_secs(5))?;
     Ok(())
 }
+
+/// How long a writer waits for another to finish. A photo import holds the lock for one
+/// short insert; a bundle import for one transaction of its rows.
+const BUSY_TIMEOUT_SECS: u64 = 30;
 
 /// A new time-ordered id (UUID v7).
 pub fn new_id() -> String {

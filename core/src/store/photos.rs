@@ -102,9 +102,9 @@ impl Store {
         let (width, height) = match &prepared.processed {
             Some(processed) => {
                 self.photos
-                    .put(Kind::Thumb, hash, "jpg", &processed.thumb_jpeg)?;
+                    .replace(Kind::Thumb, hash, "jpg", &processed.thumb_jpeg)?;
                 self.photos
-                    .put(Kind::Report, hash, "jpg", &processed.report_jpeg)?;
+                    .replace(Kind::Report, hash, "jpg", &processed.report_jpeg)?;
                 (processed.report_width, processed.report_height)
             }
             None => self.existing_size(hash)?.ok_or_else(|| {
@@ -150,13 +150,19 @@ impl Store {
         Ok(inspection_id)
     }
 
-    /// Size of an already stored report image of this content, if there is one.
+    /// Size of an already stored report image of this content, if there is one made from a
+    /// verified original (its file is named by the hash of its own bytes). Images without
+    /// their original here (from a bundle that left it out) are not reused: the photo is
+    /// made again from the bytes just hashed, and replaces them.
     fn existing_size(&self, hash: &str) -> Result<Option<(u32, u32)>> {
         let (report, thumb) = (
             self.photos.path(Kind::Report, hash, "jpg"),
             self.photos.path(Kind::Thumb, hash, "jpg"),
         );
-        if !(report.exists() && thumb.exists()) {
+        let original = ["jpg", "png"]
+            .iter()
+            .any(|ext| self.photos.path(Kind::Original, hash, ext).exists());
+        if !(original && report.exists() && thumb.exists()) {
             return Ok(None);
         }
         Ok(photo::jpeg_size(&std::fs::read(report)?).ok())
@@ -234,13 +240,20 @@ impl Store {
         Ok(out)
     }
 
-    /// Deletes photo files no row refers to, and temporary files of interrupted writes.
+    /// Deletes photo files no row refers to, and temporary files of interrupted writes, once
+    /// older than the grace period (`files::SWEEP_GRACE`): a younger one may be another
+    /// process's photo whose row is not committed yet.
     pub(super) fn sweep_orphans(&self) -> Result<usize> {
+        self.sweep_orphans_older_than(super::files::SWEEP_GRACE)
+    }
+
+    /// As `sweep_orphans`, with another grace period (zero in tests that need it now).
+    pub fn sweep_orphans_older_than(&self, grace: std::time::Duration) -> Result<usize> {
         let keep: HashSet<String> = self
             .conn
             .prepare("SELECT DISTINCT content_hash FROM photos WHERE content_hash IS NOT NULL")?
             .query_map([], |r| r.get(0))?
             .collect::<rusqlite::Result<_>>()?;
-        Ok(self.photos.sweep(&keep)?)
+        Ok(self.photos.sweep(&keep, grace)?)
     }
 }

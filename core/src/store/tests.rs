@@ -368,24 +368,46 @@ fn photos_are_stored_once_ordered_and_swept() {
     store.remove(&second.id).unwrap();
     assert_eq!(
         files_in(store.photo_dir()),
+        6,
+        "kept for the grace period: another process may be about to commit a row for them"
+    );
+    store
+        .sweep_orphans_older_than(std::time::Duration::ZERO)
+        .unwrap();
+    assert_eq!(
+        files_in(store.photo_dir()),
         3,
         "swept when no photo uses them"
     );
 
-    // A stray file and a half-written temporary are swept when the store opens.
-    std::fs::write(
-        store
-            .photo_dir()
-            .join("report")
-            .join(format!("{}.jpg", "ab".repeat(32))),
-        b"x",
-    )
-    .unwrap();
-    std::fs::write(store.photo_dir().join("thumb").join("x.jpg.tmp-1"), b"x").unwrap();
+    // A stray file and a half-written temporary are swept when the store opens, once older
+    // than the grace period; a young one (another process's, not committed yet) stays.
+    let stray = store
+        .photo_dir()
+        .join("report")
+        .join(format!("{}.jpg", "ab".repeat(32)));
+    let tmp = store.photo_dir().join("thumb").join("x.jpg.tmp-1");
+    let young = store
+        .photo_dir()
+        .join("report")
+        .join(format!("{}.jpg", "cd".repeat(32)));
+    let two_hours_ago = std::time::SystemTime::now() - std::time::Duration::from_secs(7200);
+    for path in [&stray, &tmp, &young] {
+        std::fs::write(path, b"x").unwrap();
+    }
+    for path in [&stray, &tmp] {
+        std::fs::File::options()
+            .append(true)
+            .open(path)
+            .unwrap()
+            .set_modified(two_hours_ago)
+            .unwrap();
+    }
     let dir = store.photo_dir().to_path_buf();
     drop(store);
     let store = Store::open(&t.db()).unwrap();
-    assert_eq!(files_in(&dir), 3);
+    assert!(!stray.exists() && !tmp.exists() && young.exists());
+    assert_eq!(files_in(&dir), 4);
     assert_eq!(store.photos_of("obs-k7-notch").unwrap().len(), 1);
 }
 

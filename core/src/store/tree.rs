@@ -21,7 +21,9 @@ impl Store {
     /// Rewrites the inspection's header (property, client, inspector, date, conditions, code
     /// edition, units, loads); its areas and photos are left as they are.
     pub fn update_header(&mut self, inspection: &Inspection) -> Result<()> {
-        let tx = self.conn.transaction()?;
+        let tx = self
+            .conn
+            .transaction_with_behavior(rusqlite::TransactionBehavior::Immediate)?;
         let changed = save::update_header(&tx, inspection, &now_utc())?;
         found(changed, &inspection.id)?;
         tx.commit()?;
@@ -262,7 +264,9 @@ impl Store {
         inspection_id: &str,
         change: impl FnOnce(&Transaction) -> Result<()>,
     ) -> Result<()> {
-        let tx = self.conn.transaction()?;
+        let tx = self
+            .conn
+            .transaction_with_behavior(rusqlite::TransactionBehavior::Immediate)?;
         change(&tx)?;
         Store::touch(&tx, inspection_id)?;
         tx.commit()?;

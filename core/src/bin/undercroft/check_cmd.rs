@@ -25,12 +25,15 @@ pub struct CheckArgs {
 pub fn run(args: &CheckArgs, db: Option<&std::path::Path>) -> anyhow::Result<()> {
     let inspection = match (&args.file, &args.inspection) {
         (Some(file), _) => {
-            let bytes =
-                std::fs::read(file).with_context(|| format!("cannot read {}", file.display()))?;
+            let bytes = crate::store_cmd::read_capped(
+                file,
+                undercroft_core::interchange::MAX_FILE_BYTES,
+                "an inspection file",
+            )?;
             from_json_bytes(&bytes)
                 .with_context(|| format!("{} is not a usable inspection file", file.display()))?
         }
-        (None, Some(id)) => crate::store_cmd::open(db)?.load_inspection(id)?,
+        (None, Some(id)) => crate::store_cmd::open_existing(db)?.load_inspection(id)?,
         (None, None) => anyhow::bail!("give an inspection file or --inspection ID"),
     };
     let evaluation = evaluate(&inspection);

@@ -3,15 +3,21 @@
 
 use anyhow::{bail, Context};
 use clap::Args;
-use std::path::PathBuf;
+use std::path::{Component, Path, PathBuf};
 use undercroft_core::evaluate;
 use undercroft_core::interchange::from_json_bytes;
+use undercroft_core::model::Inspection;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+use undercroft_core::store::write_durably;
 
 #[derive(Args)]
 pub struct ReportArgs {
-    /// An inspection file (photo files are looked for relative to it).
+    /// An inspection file (photo files are looked for in its folder).
     file: Option<PathBuf>,
+    /// The folder an inspection file's photos are in, instead of the file's own folder.
+    /// Photos named outside it (an absolute path, `..`) are not used.
+    #[arg(long, requires = "file")]
+    photos: Option<PathBuf>,
     /// The id of an inspection in the store instead of a file.
     #[arg(long, conflicts_with = "file")]
     inspection: Option<String>,
@@ -28,29 +34,45 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
         bail!("--paper {:?}: expected letter or a4", args.paper)
     };
     let mut store = None;
+    let scratch = Scratch::new()?;
     let (inspection, photo_files, notes) = match (&args.file, &args.inspection) {
         (Some(file), _) => {
-            let bytes =
-                std::fs::read(file).with_context(|| format!("cannot read {}", file.display()))?;
+            let bytes = crate::store_cmd::read_capped(
+                file,
+                undercroft_core::interchange::MAX_FILE_BYTES,
+                "an inspection file",
+            )?;
             let inspection = from_json_bytes(&bytes)
                 .with_context(|| format!("{} is not a usable inspection file", file.display()))?;
-            let base = file.parent().map(PathBuf::from).unwrap_or_default();
-            let files: PhotoFiles = inspection
-                .photos
-                .iter()
-                .map(|p| (p.id.clone(), base.join(&p.file)))
-                .filter(|(_, path)| path.is_file())
-                .collect();
+            let base = match &args.photos {
+                Some(folder) => folder.clone(),
+                None => match file.parent() {
+                    Some(p) if !p.as_os_str().is_empty() => p.to_path_buf(),
+                    _ => PathBuf::from("."),
+                },
+            };
+            let files = photos_in_folder(&inspection, &base, &scratch.0);
             (inspection, files, Vec::new())
         }
         (None, Some(id)) => {
-            let s = crate::store_cmd::open(db)?;
+            let s = crate::store_cmd::open_existing(db)?;
             let inspection = s.load_inspection(id)?;
-            let files: PhotoFiles = s
-                .photos_of_inspection(id)?
-                .into_iter()
-                .filter_map(|p| p.report_path.map(|path| (p.id, path)))
-                .collect();
+            let mut files = PhotoFiles::new();
+            for p in s.photos_of_inspection(id)? {
+                match p.report_path {
+                    Some(path) => {
+                        files.insert(p.id, path);
+                    }
+                    None if p.hash.is_some() => eprintln!(
+                        "warning: photo {} ({}) has lost its image file in the store; the report shows a blank in its place",
+                        p.id, p.caption
+                    ),
+                    None => eprintln!(
+                        "warning: photo {} ({}) was imported without its image; the report shows a blank in its place",
+                        p.id, p.caption
+                    ),
+                }
+            }
             let notes = s.finding_notes(id)?;
             store = Some(s);
             (inspection, files, notes)
@@ -66,7 +88,8 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
         paper,
     });
     let bytes = pdf::render(&report);
-    std::fs::write(&args.output, &bytes)
+    // Written to a temporary name and renamed: a killed run leaves the old file whole.
+    write_durably(&args.output, &bytes)
         .with_context(|| format!("cannot write {}", args.output.display()))?;
     if let Some(mut s) = store {
         let name = args
@@ -83,4 +106,77 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
     }
     println!("wrote {} ({} bytes)", args.output.display(), bytes.len());
     Ok(())
+}
+
+/// A scratch folder for photos imported for one report, removed when the run ends.
+struct Scratch(PathBuf);
+
+impl Scratch {
+    fn new() -> anyhow::Result<Scratch> {
+        let dir = std::env::temp_dir().join(format!(
+            "undercroft-report-{}-{}",
+            std::process::id(),
+            undercroft_core::store::new_id()
+        ));
+        std::fs::create_dir_all(&dir)
+            .with_context(|| format!("cannot make a scratch folder {}", dir.display()))?;
+        Ok(Scratch(dir))
+    }
+}
+
+impl Drop for Scratch {
+    fn drop(&mut self) {
+        let _ = std::fs::remove_dir_all(&self.0);
+    }
+}
+
+/// The photos an inspection file names, found only inside `base` (no absolute paths, no
+/// `..`, no link out of it) and put through the same import as any photo (upright, resized,
+/// no metadata) into `scratch`. A photo that cannot be used is said on stderr and shows as a
+/// blank in the report.
+fn photos_in_folder(inspection: &Inspection, base: &Path, scratch: &Path) -> PhotoFiles {
+    let mut files = PhotoFiles::new();
+    let root = base.canonicalize().ok();
+    for (n, p) in inspection.photos.iter().enumerate() {
+        let refuse = |why: String| {
+            eprintln!(
+                "warning: photo {} ({}): {why}; the report shows a blank in its place",
+                p.id, p.file
+            )
+        };
+        let rel = Path::new(&p.file);
+        if rel.is_absolute() || rel.components().any(|c| !matches!(c, Component::Normal(_))) {
+            refuse(format!("is not inside {}", base.display()));
+            continue;
+        }
+        let path = base.join(rel);
+        let inside = match (&root, path.canonicalize()) {
+            (Some(root), Ok(real)) => real.starts_with(root),
+            (_, Err(e)) => {
+                refuse(format!("cannot be read ({e})"));
+                continue;
+            }
+            (None, _) => false,
+        };
+        if !inside {
+            refuse(format!("leads outside {}", base.display()));
+            continue;
+        }
+        let processed =
+            crate::store_cmd::read_capped(&path, undercroft_core::photo::MAX_FILE_BYTES, "a photo")
+                .and_then(|bytes| Ok(undercroft_core::photo::process(&bytes)?));
+        match processed {
+            Ok(photo) => {
+                let out = scratch.join(format!("{n}.jpg"));
+                match std::fs::write(&out, &photo.report_jpeg) {
+                    Ok(()) => {
+                        files.insert(p.id.clone(), out);
+                    }
+                    Err(e) => refuse(format!("could not be prepared ({e})")),
+                }
+            }
+            Err(e) => refuse(format!("{e:#}")),
+        }
+    }
+    files
 }

@@ -5,29 +5,57 @@ use clap::Args;
 use std::path::{Path, PathBuf};
 use undercroft_core::interchange::{from_json_bytes, to_json};
 use undercroft_core::model::RoomUse;
-use undercroft_core::store::{ListFilter, NewInspection, Store};
+use undercroft_core::store::{write_durably, ListFilter, NewInspection, Store};
 
-/// Refuses a file larger than `limit` before reading it into memory.
-fn refuse_if_larger(path: &Path, limit: u64, what: &str) -> anyhow::Result<()> {
-    let size = std::fs::metadata(path)
-        .with_context(|| format!("cannot read {}", path.display()))?
-        .len();
-    if size > limit {
+/// Reads a file, or a pipe or device, refusing it once it passes `limit` bytes: the cap holds
+/// whatever the file's metadata says (a pipe says 0, /dev/zero never ends, a sparse file
+/// claims gigabytes), so memory stays bounded by the limit.
+pub fn read_capped(path: &Path, limit: usize, what: &str) -> anyhow::Result<Vec<u8>> {
+    use std::io::Read;
+    let file =
+        std::fs::File::open(path).with_context(|| format!("cannot read {}", path.display()))?;
+    if file.metadata().is_ok_and(|m| m.is_dir()) {
+        bail!("{} is a folder, not {what}", path.display());
+    }
+    let claimed = file.metadata().map(|m| m.len()).unwrap_or(0);
+    if claimed > limit as u64 {
         bail!(
-            "{} is {size} bytes, too large for {what} (at most {limit})",
+            "{} is {claimed} bytes, too large for {what} (at most {limit})",
             path.display()
         );
     }
-    Ok(())
+    let mut bytes = Vec::with_capacity((claimed as usize).min(limit));
+    file.take(limit as u64 + 1)
+        .read_to_end(&mut bytes)
+        .with_context(|| format!("cannot read {}", path.display()))?;
+    if bytes.len() > limit {
+        bail!(
+            "{} is more than {limit} bytes, too large for {what}",
+            path.display()
+        );
+    }
+    Ok(bytes)
 }
 
-/// Opens the store at `--db`, or in the platform's data folder.
+fn store_path(db: Option<&Path>) -> anyhow::Result<std::path::PathBuf> {
+    match db {
+        Some(p) => Ok(p.to_path_buf()),
+        None => Store::default_path().context("no data folder on this platform; give --db PATH"),
+    }
+}
+
+/// Opens the store at `--db`, or in the platform's data folder, creating it if needed (for
+/// commands that write).
 pub fn open(db: Option<&Path>) -> anyhow::Result<Store> {
-    let path = match db {
-        Some(p) => p.to_path_buf(),
-        None => Store::default_path().context("no data folder on this platform; give --db PATH")?,
-    };
+    let path = store_path(db)?;
     Store::open(&path).with_context(|| format!("cannot open the store at {}", path.display()))
+}
+
+/// Opens a store that must exist (for commands that only read): a missing path is refused.
+pub fn open_existing(db: Option<&Path>) -> anyhow::Result<Store> {
+    let path = store_path(db)?;
+    Store::open_existing(&path)
+        .with_context(|| format!("cannot open the store at {}", path.display()))
 }
 
 #[derive(Args)]
@@ -41,7 +69,7 @@ pub struct ListArgs {
 }
 
 pub fn list(args: &ListArgs, db: Option<&Path>) -> anyhow::Result<()> {
-    let store = open(db)?;
+    let store = open_existing(db)?;
     let rows = store.list_inspections(&ListFilter {
         search: args.search.clone(),
         include_archived: args.all,
@@ -99,6 +127,9 @@ pub fn new(args: &NewArgs, db: Option<&Path>) -> anyhow::Result<()> {
 pub struct ImportArgs {
     /// An inspection file (.json) or a bundle (.zip).
     file: PathBuf,
+    /// Import as a copy with new ids, beside a stored inspection that holds the same ids.
+    #[arg(long)]
+    as_copy: bool,
 }
 
 pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
@@ -109,19 +140,22 @@ pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
         .unwrap_or(false);
     let outcome = if is_zip {
         open(db)?
-            .import_bundle(&args.file)
+            .import_bundle_with(&args.file, args.as_copy)
             .with_context(|| format!("{} is not a usable bundle", args.file.display()))?
     } else {
-        refuse_if_larger(
+        let bytes = read_capped(
             &args.file,
-            undercroft_core::interchange::MAX_FILE_BYTES as u64,
+            undercroft_core::interchange::MAX_FILE_BYTES,
             "an inspection file",
         )?;
-        let bytes = std::fs::read(&args.file)
-            .with_context(|| format!("cannot read {}", args.file.display()))?;
         let inspection = from_json_bytes(&bytes)
             .with_context(|| format!("{} is not a usable inspection file", args.file.display()))?;
-        open(db)?.import_inspection(&inspection)?
+        let mut store = open(db)?;
+        if args.as_copy {
+            store.import_inspection_copy(&inspection)?
+        } else {
+            store.import_inspection(&inspection)?
+        }
     };
     let verb = if outcome.replaced {
         "replaced"
@@ -148,10 +182,10 @@ pub struct ExportArgs {
 }
 
 pub fn export(args: &ExportArgs, db: Option<&Path>) -> anyhow::Result<()> {
-    let store = open(db)?;
+    let store = open_existing(db)?;
     if args.json {
         let inspection = store.export_inspection(&args.id)?;
-        std::fs::write(&args.output, to_json(&inspection))
+        write_durably(&args.output, to_json(&inspection).as_bytes())
             .with_context(|| format!("cannot write {}", args.output.display()))?;
     } else {
         store.export_bundle(&args.id, &args.output)?;
@@ -171,13 +205,11 @@ pub struct AddPhotoArgs {
 }
 
 pub fn add_photo(args: &AddPhotoArgs, db: Option<&Path>) -> anyhow::Result<()> {
-    refuse_if_larger(
+    let bytes = read_capped(
         &args.file,
-        undercroft_core::photo::MAX_FILE_BYTES as u64,
+        undercroft_core::photo::MAX_FILE_BYTES,
         "a photo",
     )?;
-    let bytes = std::fs::read(&args.file)
-        .with_context(|| format!("cannot read {}", args.file.display()))?;
     let mut store = open(db)?;
     let photo = store
         .add_photo(&args.owner, &bytes, &args.caption)
