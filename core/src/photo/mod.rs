@@ -26,6 +26,10 @@ pub const MAX_SIDE: u32 = 16_384;
 pub const MAX_JPEG_PIXELS: u64 = 210_000_000;
 /// Largest PNG accepted, pixels: PNGs are decoded at full size (3 bytes a pixel).
 pub const MAX_PNG_PIXELS: u64 = 40_000_000;
+/// Most memory one photo's decode may take: the buffered coefficients of a progressive JPEG,
+/// or a PNG's decoded pixels. With the file itself (at most 64 MiB) and the output images,
+/// one command stays well under 256 MiB.
+pub const DECODE_BUDGET_BYTES: u64 = 128 * 1024 * 1024;
 
 #[derive(Debug, Error, PartialEq)]
 pub enum PhotoError {
@@ -41,6 +45,8 @@ pub enum PhotoError {
     TooManyPixels(u32, u32),
     #[error("the image is damaged or cut short: {0}")]
     Damaged(String),
+    #[error("the image is {0} x {1} px, {2}: decoding it would take more than 128 MiB; export it as a standard JPEG or a smaller image")]
+    OverBudget(u32, u32, &'static str),
 }
 
 /// The two images kept for the report, and what was learnt on the way.

@@ -1,7 +1,7 @@
 //! Pixel work: decode (JPEG at reduced scale with libjpeg-turbo, PNG with `image`), resize
 //! (fast_image_resize, bilinear), orient, encode (libjpeg-turbo, 4:2:0, no metadata).
 
-use super::{exif, PhotoError, MAX_JPEG_PIXELS, MAX_PNG_PIXELS, MAX_SIDE};
+use super::{exif, PhotoError, DECODE_BUDGET_BYTES, MAX_JPEG_PIXELS, MAX_PNG_PIXELS, MAX_SIDE};
 use fast_image_resize::images::Image as FirImage;
 use fast_image_resize::{FilterType, PixelType, ResizeAlg, ResizeOptions, Resizer};
 use image::metadata::Orientation;
@@ -45,10 +45,49 @@ pub fn jpeg_header(bytes: &[u8]) -> Result<(u32, u32), PhotoError> {
     Ok((w, h))
 }
 
+/// Bytes libjpeg-turbo holds for a JPEG it must buffer whole before output (progressive, or
+/// several scans): every DCT coefficient of every component, 2 bytes each (libjpeg's
+/// jdcoefct.c, buffered-image mode), whatever the output scale. None for a single-scan
+/// sequential JPEG, which is decoded a band at a time.
+pub fn jpeg_coefficient_bytes(bytes: &[u8], width: u32, height: u32) -> Option<u64> {
+    let mut progressive = false;
+    let mut sampling: Vec<(u64, u64)> = Vec::new();
+    for (marker, body) in exif::segments(bytes) {
+        // SOF0..SOF15 except DHT (C4), JPG (C8) and DAC (CC).
+        if (0xC0..=0xCF).contains(&marker) && ![0xC4, 0xC8, 0xCC].contains(&marker) {
+            progressive = matches!(marker, 0xC2 | 0xC6 | 0xCA | 0xCE);
+            let count = *body.get(5)? as usize;
+            sampling = (0..count)
+                .filter_map(|c| body.get(6 + 3 * c + 1))
+                .map(|f| ((f >> 4).max(1) as u64, (f & 0x0F).max(1) as u64))
+                .collect();
+        }
+    }
+    let scan = exif::first_scan(bytes)?;
+    // Inside entropy-coded data every FF is stuffed (ITU T.81 B.1.1.5): another FF DA is
+    // another scan.
+    let several_scans = bytes[scan + 2..].windows(2).any(|w| w == [0xFF, 0xDA]);
+    if !(progressive || several_scans) || sampling.is_empty() {
+        return None;
+    }
+    let hmax = sampling.iter().map(|s| s.0).max()?;
+    let vmax = sampling.iter().map(|s| s.1).max()?;
+    let blocks = |size: u64, f: u64, max: u64| (size * f).div_ceil(max).div_ceil(8);
+    Some(
+        sampling
+            .iter()
+            .map(|&(hf, vf)| blocks(width as u64, hf, hmax) * blocks(height as u64, vf, vmax) * 128)
+            .sum(),
+    )
+}
+
 /// Decodes a JPEG at the smallest DCT scale (1/8, 1/4, 1/2, 1) whose long side still reaches
 /// `long_side`. Warnings (a file cut short) are errors: a half-grey photo is not evidence.
 pub fn decode_jpeg(bytes: &[u8], long_side: u32) -> Result<Decoded, PhotoError> {
     let (width, height) = jpeg_header(bytes)?;
+    if jpeg_coefficient_bytes(bytes, width, height).is_some_and(|b| b > DECODE_BUDGET_BYTES) {
+        return Err(PhotoError::OverBudget(width, height, "a progressive JPEG"));
+    }
     let long = width.max(height);
     let scale = [8u32, 4, 2]
         .into_iter()
@@ -101,10 +140,21 @@ pub fn decode_png(bytes: &[u8]) -> Result<Decoded, PhotoError> {
         image::codecs::png::PngDecoder::new(std::io::Cursor::new(bytes)).map_err(damaged)?;
     let (width, height) = decoder.dimensions();
     check_size(width, height, MAX_PNG_PIXELS)?;
+    // The decoded buffer (up to 8 bytes a pixel for 16-bit RGBA) and, unless it is already
+    // 8-bit RGB, its 3-byte copy.
+    let decoded = decoder.color_type().bytes_per_pixel() as u64;
+    let copy = if decoder.color_type() == image::ColorType::Rgb8 {
+        0
+    } else {
+        3
+    };
+    if width as u64 * height as u64 * (decoded + copy) > DECODE_BUDGET_BYTES {
+        return Err(PhotoError::OverBudget(width, height, "a PNG of this depth"));
+    }
     let mut limits = image::Limits::default();
     limits.max_image_width = Some(MAX_SIDE);
     limits.max_image_height = Some(MAX_SIDE);
-    limits.max_alloc = Some(MAX_PNG_PIXELS * 8);
+    limits.max_alloc = Some(DECODE_BUDGET_BYTES);
     decoder.set_limits(limits).map_err(damaged)?;
     let orientation = decoder.orientation().map(|o| o.to_exif()).unwrap_or(1);
     let image = DynamicImage::from_decoder(decoder)
