@@ -26,7 +26,9 @@ impl Drop for Temp {
     }
 }
 
-/// Runs the command and returns (success, peak RSS in KiB, stderr).
+/// Runs the command and returns (success, peak RSS in KiB, stderr). The child is reaped by
+/// wait4 (which also gives its rusage), not by `Child::wait`.
+#[allow(clippy::zombie_processes)]
 fn peak(args: &[&str]) -> (bool, i64, String) {
     let err_path = std::env::temp_dir().join(format!(
         "undercroft-mem-stderr-{}-{}",
