@@ -551,3 +551,216 @@ fn report_command_writes_a_pdf_and_records_the_delivery() {
         stderr(&o)
     );
 }
+
+#[test]
+fn stores_that_are_not_ours_or_not_there_are_refused_untouched() {
+    let t = TempStore::new("foreign");
+    let other = t.0.join("other-app.sqlite");
+    {
+        let conn = rusqlite::Connection::open(&other).unwrap();
+        conn.execute_batch("CREATE TABLE songs (title TEXT); INSERT INTO songs VALUES ('x');")
+            .unwrap();
+    }
+    let before = std::fs::read(&other).unwrap();
+    let o = undercroft(&["--db", other.to_str().unwrap(), "list"]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(
+        stderr(&o).contains("another program's database"),
+        "{}",
+        stderr(&o)
+    );
+    assert_eq!(std::fs::read(&other).unwrap(), before, "left untouched");
+    assert!(!t.0.join("other-app-photos").exists());
+
+    let missing = t.0.join("nothing-here.sqlite");
+    let o = undercroft(&["--db", missing.to_str().unwrap(), "list"]);
+    assert!(stderr(&o).contains("there is no store"), "{}", stderr(&o));
+    assert!(!missing.exists(), "a read-only command created a store");
+}
+
+#[test]
+fn import_names_the_inspection_holding_the_ids_and_imports_a_copy() {
+    let t = TempStore::new("ids");
+    let db = t.db();
+    assert!(undercroft(&["--db", &db, "import", &demo()])
+        .status
+        .success());
+    let renamed = t.0.join("renamed.json");
+    let text = std::fs::read_to_string(demo())
+        .unwrap()
+        .replace("0193a1c2-7d00-7000-8000-00000000d001", "another-id");
+    std::fs::write(&renamed, text).unwrap();
+    let o = undercroft(&["--db", &db, "import", renamed.to_str().unwrap()]);
+    assert_eq!(o.status.code(), Some(2));
+    let err = stderr(&o);
+    assert!(
+        err.contains("2719 Quillback Road") && err.contains("--as-copy") && !err.contains("UNIQUE"),
+        "{err}"
+    );
+    let o = undercroft(&[
+        "--db",
+        &db,
+        "import",
+        "--as-copy",
+        renamed.to_str().unwrap(),
+    ]);
+    assert!(o.status.success(), "{}", stderr(&o));
+    assert_eq!(
+        stdout(&undercroft(&["--db", &db, "list"])).lines().count(),
+        2
+    );
+
+    // Dates are real days.
+    let o = undercroft(&[
+        "--db",
+        &db,
+        "new",
+        "--address",
+        "1 Elm",
+        "--date",
+        "2026-02-30",
+    ]);
+    assert!(stderr(&o).contains("has 28 days"), "{}", stderr(&o));
+}
+
+#[test]
+fn bundles_cannot_plant_pictures_or_repeat_entries() {
+    let t = TempStore::new("plant");
+    let db = t.db();
+    assert!(undercroft(&["--db", &db, "import", &demo()])
+        .status
+        .success());
+    let photo = jpeg_file(&t.0);
+    let real = std::fs::read(&photo).unwrap();
+    let hash = {
+        use sha2::Digest;
+        sha2::Sha256::digest(&real)
+            .iter()
+            .map(|b| format!("{b:02x}"))
+            .collect::<String>()
+    };
+    let demo_bytes = std::fs::read(demo()).unwrap();
+    let write_zip = |name: &str, entries: &[(&str, &[u8])]| {
+        let path = t.0.join(name);
+        let mut zip = zip::ZipWriter::new(std::fs::File::create(&path).unwrap());
+        let stored = zip::write::SimpleFileOptions::default()
+            .compression_method(zip::CompressionMethod::Stored);
+        zip.start_file("inspection.json", stored).unwrap();
+        std::io::Write::write_all(&mut zip, &demo_bytes).unwrap();
+        for (entry, bytes) in entries {
+            zip.start_file(*entry, stored).unwrap();
+            std::io::Write::write_all(&mut zip, bytes).unwrap();
+        }
+        zip.finish().unwrap();
+        path
+    };
+    // Another picture under the real photo's hash.
+    let other = {
+        let image = image::RgbImage::from_fn(64, 64, |_, _| image::Rgb([200, 0, 0]));
+        let mut png = Vec::new();
+        image::DynamicImage::ImageRgb8(image)
+            .write_to(&mut std::io::Cursor::new(&mut png), image::ImageFormat::Png)
+            .unwrap();
+        png
+    };
+    let planted = write_zip("planted.zip", &[(&format!("originals/{hash}.png"), &other)]);
+    let o = undercroft(&["--db", &db, "import", planted.to_str().unwrap()]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(
+        stderr(&o).contains("does not hold the photo its name promises"),
+        "{}",
+        stderr(&o)
+    );
+    // Nothing of it was stored: the real photo, added now, is processed from its own bytes.
+    let report_dir = t.0.join("store-photos").join("report");
+    assert!(!report_dir.join(format!("{hash}.jpg")).exists());
+
+    // A repeated entry is refused. The zip writer will not repeat a name, so two entries
+    // whose names differ in one letter's case are written and the bytes patched to match.
+    let once = write_zip("once.zip", &[(&format!("originals/{hash}.png"), &real)]);
+    let twice_name = format!("originals/{hash}.png").replace("originals", "Originals");
+    let twice = t.0.join("twice.zip");
+    let mut zip = zip::ZipWriter::new(std::fs::File::create(&twice).unwrap());
+    let stored =
+        zip::write::SimpleFileOptions::default().compression_method(zip::CompressionMethod::Stored);
+    zip.start_file("inspection.json", stored).unwrap();
+    std::io::Write::write_all(&mut zip, &demo_bytes).unwrap();
+    for name in [format!("originals/{hash}.png"), twice_name.clone()] {
+        zip.start_file(name, stored).unwrap();
+        std::io::Write::write_all(&mut zip, &real).unwrap();
+    }
+    zip.finish().unwrap();
+    let mut raw = std::fs::read(&twice).unwrap();
+    let from = twice_name.as_bytes();
+    let to = format!("originals/{hash}.png");
+    let mut at = 0;
+    while let Some(pos) = raw[at..].windows(from.len()).position(|w| w == from) {
+        raw[at + pos..at + pos + from.len()].copy_from_slice(to.as_bytes());
+        at += pos + from.len();
+    }
+    std::fs::write(&twice, &raw).unwrap();
+    let o = undercroft(&["--db", &db, "import", twice.to_str().unwrap()]);
+    assert_eq!(o.status.code(), Some(2));
+    assert!(stderr(&o).contains("appears twice"), "{}", stderr(&o));
+
+    // The honest bundle imports, its images made from the verified original.
+    let o = undercroft(&["--db", &db, "import", once.to_str().unwrap()]);
+    assert!(o.status.success(), "{}", stderr(&o));
+    assert!(report_dir.join(format!("{hash}.jpg")).exists());
+}
+
+#[test]
+fn report_photos_stay_inside_the_files_folder_and_outputs_are_whole() {
+    let t = TempStore::new("reportpaths");
+    let photo = jpeg_file(&t.0);
+    let inner = t.0.join("inner");
+    std::fs::create_dir_all(&inner).unwrap();
+    let text = std::fs::read_to_string(demo()).unwrap().replacen(
+        "\"photos\": []",
+        &format!(
+            "\"photos\": [{{\"id\": \"p-out\", \"file\": \"{}\", \"attached_to\": \"obs-k7-notch\"}}, {{\"id\": \"p-up\", \"file\": \"../photo.png\", \"attached_to\": \"obs-k7-notch\"}}]",
+            photo.display()
+        ),
+        1,
+    );
+    let file = inner.join("inspection.json");
+    std::fs::write(&file, text).unwrap();
+    // A bare output name is written in the current folder.
+    let o = Command::new(env!("CARGO_BIN_EXE_undercroft"))
+        .current_dir(&inner)
+        .args(["report", "inspection.json", "-o", "bare.pdf"])
+        .output()
+        .unwrap();
+    assert!(o.status.success(), "{}", stderr(&o));
+    let err = stderr(&o);
+    assert!(
+        err.contains("p-out") && err.contains("p-up") && err.contains("not inside"),
+        "{err}"
+    );
+    assert!(std::fs::read(inner.join("bare.pdf"))
+        .unwrap()
+        .starts_with(b"%PDF-"));
+    let leftovers: Vec<_> = std::fs::read_dir(&inner)
+        .unwrap()
+        .flatten()
+        .filter(|e| e.file_name().to_string_lossy().contains(".tmp"))
+        .collect();
+    assert!(leftovers.is_empty());
+
+    let db = t.db();
+    undercroft(&["--db", &db, "import", &demo()]);
+    let o = Command::new(env!("CARGO_BIN_EXE_undercroft"))
+        .current_dir(&t.0)
+        .args([
+            "--db",
+            &db,
+            "export",
+            "0193a1c2-7d00-7000-8000-00000000d001",
+            "-o",
+            "bundle.zip",
+        ])
+        .output()
+        .unwrap();
+    assert!(o.status.success(), "{}", stderr(&o));
+    assert!(t.0.join("bundle.zip").is_file());
+}

@@ -160,9 +160,17 @@ impl Store {
         path: &Path,
         as_copy: bool,
     ) -> std::result::Result<ImportOutcome, ImportError> {
-        let file = std::fs::File::open(path).map_err(StoreError::from)?;
+        let mut file = std::fs::File::open(path).map_err(StoreError::from)?;
+        let declared = declared_entries(&mut file);
         let mut zip =
             zip::ZipArchive::new(file).map_err(|e| BundleError::NotAZip(e.to_string()))?;
+        // The zip reader keeps one entry per name; a directory that declares more entries
+        // than it yields repeats a name.
+        if declared.is_some_and(|n| n != zip.len() as u64) {
+            return Err(
+                BundleError::Duplicate("(a name repeated in the zip directory)".into()).into(),
+            );
+        }
         let survey = survey(&mut zip)?;
         // Every original must be what its name says before anything is written.
         for image in survey.images.iter().filter(|i| i.kind == Kind::Original) {
@@ -415,6 +423,24 @@ fn survey<R: Read + std::io::Seek>(
         notes,
         images,
     })
+}
+
+/// The number of entries the zip's end-of-central-directory record declares (APPNOTE 4.3.16:
+/// signature 50 4B 05 06, total entries at offset 10), if it can be read and is not the
+/// ZIP64 placeholder.
+fn declared_entries(file: &mut std::fs::File) -> Option<u64> {
+    use std::io::{Seek, SeekFrom};
+    let len = file.seek(SeekFrom::End(0)).ok()?;
+    let tail = len.min(22 + 65_535);
+    file.seek(SeekFrom::Start(len - tail)).ok()?;
+    let mut bytes = Vec::with_capacity(tail as usize);
+    file.take(tail).read_to_end(&mut bytes).ok()?;
+    file.seek(SeekFrom::Start(0)).ok()?;
+    let at = bytes
+        .windows(4)
+        .rposition(|w| w == [0x50, 0x4B, 0x05, 0x06])?;
+    let total = u16::from_le_bytes([*bytes.get(at + 10)?, *bytes.get(at + 11)?]);
+    (total != 0xFFFF).then_some(total as u64)
 }
 
 /// One entry's bytes, read at most to the limit + 1 byte whatever its header claims (a lying
