@@ -297,7 +297,14 @@ fn area_section(
                     (f.rule_id() == "joist-span").then(|| f.place.member_id.to_string())
                 });
             let photos = owner.map(|o| photos_of(&o, placed)).unwrap_or_default();
-            finding_block(f, notes, photos)
+            let seen = f.observation_id.as_deref().and_then(|id| {
+                ctxs.iter()
+                    .flat_map(|c| c.observations.iter())
+                    .find(|o| &*o.id == id)
+                    .map(|o| o.note.trim())
+                    .filter(|n| !n.is_empty())
+            });
+            finding_block(f, notes, seen, photos)
         })
         .collect();
     let mut photos = photos_of(&area.id, placed);
@@ -388,10 +395,14 @@ fn member_row(ctx: &MemberContext, area_name: &str) -> MemberRow {
 fn finding_block(
     f: &Finding,
     notes: &HashMap<&str, &FindingNote>,
+    seen: Option<&str>,
     photos: Vec<PhotoSlot>,
 ) -> FindingBlock {
     let note = notes.get(f.key().as_str());
     let mut facts = Vec::new();
+    if let Some(seen) = seen {
+        facts.push(("Noted on site".to_string(), seen.to_string()));
+    }
     if let Some(g) = f.governing_check() {
         let bound = match (g.bound, g.ratio) {
             (crate::finding::Bound::AtLeast, Some(_)) => "at least ",

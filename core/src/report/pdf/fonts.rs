@@ -1,5 +1,6 @@
-//! The report's fonts, parsed once: DejaVu Sans (regular, bold) and Droid Sans Fallback for
-//! characters DejaVu lacks (CJK). Text is measured here and split into runs by font.
+//! The report's fonts, parsed once: DejaVu Sans (regular, bold; Latin, Greek, Cyrillic,
+//! Hebrew, Arabic), Droid Sans Fallback for Chinese and Japanese, and NanumSquare for Korean
+//! Hangul. Text is measured here and split into runs by font.
 
 use printpdf::ParsedFont;
 use std::sync::OnceLock;
@@ -7,12 +8,14 @@ use std::sync::OnceLock;
 const REGULAR: &[u8] = include_bytes!("../../../assets/fonts/DejaVuSans.ttf");
 const BOLD: &[u8] = include_bytes!("../../../assets/fonts/DejaVuSans-Bold.ttf");
 const FALLBACK: &[u8] = include_bytes!("../../../assets/fonts/DroidSansFallbackFull.ttf");
+const HANGUL: &[u8] = include_bytes!("../../../assets/fonts/NanumSquareR.ttf");
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
 pub enum Face {
     Regular,
     Bold,
     Fallback,
+    Hangul,
 }
 
 fn parse(bytes: &[u8]) -> ParsedFont {
@@ -23,27 +26,36 @@ pub fn font(face: Face) -> &'static ParsedFont {
     static REG: OnceLock<ParsedFont> = OnceLock::new();
     static BLD: OnceLock<ParsedFont> = OnceLock::new();
     static FB: OnceLock<ParsedFont> = OnceLock::new();
+    static HG: OnceLock<ParsedFont> = OnceLock::new();
     match face {
         Face::Regular => REG.get_or_init(|| parse(REGULAR)),
         Face::Bold => BLD.get_or_init(|| parse(BOLD)),
         Face::Fallback => FB.get_or_init(|| parse(FALLBACK)),
+        Face::Hangul => HG.get_or_init(|| parse(HANGUL)),
     }
 }
 
-/// The face that draws `c` in the wanted style: the style's own, else the fallback when it
-/// has the glyph, else the style's own (which draws a missing-glyph box).
-fn face_for(c: char, style: Face) -> Face {
-    if c.is_whitespace()
-        || font(style)
-            .lookup_glyph_index(c as u32)
-            .is_some_and(|g| g != 0)
-    {
-        return style;
-    }
-    if font(Face::Fallback)
+/// Korean letters: Hangul syllables, jamo and compatibility jamo.
+fn is_hangul(c: char) -> bool {
+    matches!(c as u32, 0xAC00..=0xD7A3 | 0x1100..=0x11FF | 0x3130..=0x318F | 0xA960..=0xA97F | 0xD7B0..=0xD7FF)
+}
+
+fn has(face: Face, c: char) -> bool {
+    font(face)
         .lookup_glyph_index(c as u32)
         .is_some_and(|g| g != 0)
-    {
+}
+
+/// The face that draws `c` in the wanted style: the style's own, else the Hangul face for
+/// Korean, else the CJK fallback when it has the glyph, else the style's own (which draws a
+/// missing-glyph box).
+fn face_for(c: char, style: Face) -> Face {
+    if c.is_whitespace() || has(style, c) {
+        return style;
+    }
+    if is_hangul(c) && has(Face::Hangul, c) {
+        Face::Hangul
+    } else if has(Face::Fallback, c) {
         Face::Fallback
     } else {
         style

@@ -3,6 +3,7 @@
 
 mod draw;
 mod fonts;
+mod scripts;
 mod sections;
 mod writer;
 

@@ -100,6 +100,8 @@ impl Writer {
         color: (f32, f32, f32),
     ) {
         let mut cursor = x;
+        let text = super::scripts::visual(text);
+        let text: &str = &text;
         self.ops.push(Op::StartTextSection);
         self.ops.push(Op::SetFillColor {
             col: rgb(color.0, color.1, color.2),
