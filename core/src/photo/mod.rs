@@ -83,7 +83,20 @@ pub fn process(bytes: &[u8]) -> Result<ProcessedPhoto, PhotoError> {
     let (source_width, source_height) = (decoded.source_width, decoded.source_height);
     let report = pixels::fit(decoded.image, REPORT_LONG_SIDE)?;
     let report = pixels::orient(report, orientation);
-    let thumb = pixels::fit(report.clone(), THUMB_LONG_SIDE)?;
+    // The thumbnail is made and encoded beside the report image's encoding.
+    let (report_jpeg, thumb) = std::thread::scope(|s| {
+        let thumb = s.spawn(|| -> Result<_, PhotoError> {
+            let thumb = pixels::fit(report.clone(), THUMB_LONG_SIDE)?;
+            let jpeg = pixels::encode(&thumb, THUMB_QUALITY)?;
+            Ok((thumb.width, thumb.height, jpeg))
+        });
+        let report_jpeg = pixels::encode(&report, REPORT_QUALITY);
+        (
+            report_jpeg,
+            thumb.join().expect("the thumbnail does not panic"),
+        )
+    });
+    let (thumb_width, thumb_height, thumb_jpeg) = thumb?;
     Ok(ProcessedPhoto {
         format,
         source_width,
@@ -91,10 +104,10 @@ pub fn process(bytes: &[u8]) -> Result<ProcessedPhoto, PhotoError> {
         orientation,
         report_width: report.width,
         report_height: report.height,
-        report_jpeg: pixels::encode(&report, REPORT_QUALITY)?,
-        thumb_width: thumb.width,
-        thumb_height: thumb.height,
-        thumb_jpeg: pixels::encode(&thumb, THUMB_QUALITY)?,
+        report_jpeg: report_jpeg?,
+        thumb_width,
+        thumb_height,
+        thumb_jpeg,
     })
 }
 

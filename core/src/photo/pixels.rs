@@ -89,10 +89,11 @@ pub fn decode_jpeg(bytes: &[u8], long_side: u32) -> Result<Decoded, PhotoError> 
         return Err(PhotoError::OverBudget(width, height, "a progressive JPEG"));
     }
     let long = width.max(height);
-    let scale = [8u32, 4, 2]
-        .into_iter()
-        .find(|d| long.div_ceil(*d) >= long_side)
-        .map(|d| ScalingFactor::new(1, d as usize))
+    // libjpeg-turbo's scaled inverse DCTs (M/8 for M = 1..8): the smallest output that still
+    // reaches the long side, so the fewest pixels are decoded and resized.
+    let scale = (1..8usize)
+        .map(|m| ScalingFactor::new(m, 8))
+        .find(|f| f.scale(long as usize) >= long_side as usize)
         .unwrap_or(ScalingFactor::ONE);
     let mut decompressor = Decompressor::new().map_err(damaged)?;
     decompressor.set_scaling_factor(scale).map_err(damaged)?;

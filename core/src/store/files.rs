@@ -34,6 +34,16 @@ impl Kind {
     }
 }
 
+/// A file written and synced under a temporary name, waiting for its name.
+pub struct Staged(PathBuf);
+
+impl Staged {
+    /// Drops the staged file (the photo was refused).
+    pub fn discard(self) {
+        let _ = fs::remove_file(&self.0);
+    }
+}
+
 pub struct PhotoFiles {
     root: PathBuf,
 }
@@ -78,6 +88,48 @@ impl PhotoFiles {
     ) -> std::io::Result<PathBuf> {
         let path = self.path(kind, hash, ext);
         write_durably(&path, bytes)?;
+        Ok(path)
+    }
+
+    /// Writes bytes whose name is not known yet (a photo still being hashed) to a temporary
+    /// file in `kind`'s folder and syncs it, so the sync overlaps the work that finds the name.
+    pub fn stage(&self, kind: Kind, bytes: &[u8]) -> std::io::Result<Staged> {
+        static NEXT: std::sync::atomic::AtomicU64 = std::sync::atomic::AtomicU64::new(0);
+        let n = NEXT.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+        let tmp = self
+            .root
+            .join(kind.folder())
+            .join(format!("staged.tmp-{}-{n}", std::process::id()));
+        let written = (|| {
+            let mut file = File::create(&tmp)?;
+            file.write_all(bytes)?;
+            file.sync_all()
+        })();
+        match written {
+            Ok(()) => Ok(Staged(tmp)),
+            Err(e) => {
+                let _ = fs::remove_file(&tmp);
+                Err(e)
+            }
+        }
+    }
+
+    /// Gives a staged file its name (renamed, the folder synced); when a file of that name
+    /// is already there, it is kept (renewed) and the staged copy dropped.
+    pub fn commit(
+        &self,
+        staged: Staged,
+        kind: Kind,
+        hash: &str,
+        ext: &str,
+    ) -> std::io::Result<PathBuf> {
+        let path = self.path(kind, hash, ext);
+        if path.exists() && renew(&path).is_ok() {
+            let _ = fs::remove_file(&staged.0);
+            return Ok(path);
+        }
+        fs::rename(&staged.0, &path)?;
+        File::open(self.root.join(kind.folder()))?.sync_all()?;
         Ok(path)
     }
 

@@ -30,11 +30,16 @@ pub fn prepare_photo(bytes: &[u8]) -> Result<PreparedPhoto> {
             e
         }
     })?;
-    let processed = photo::process(bytes)?;
+    // The hash (about 10 ms for a 4 MB photo) runs beside the decode.
+    let (hash, processed) = std::thread::scope(|s| {
+        let hash = s.spawn(|| content_hash(bytes));
+        let processed = photo::process(bytes);
+        (hash.join().expect("hashing does not panic"), processed)
+    });
     Ok(PreparedPhoto {
-        hash: content_hash(bytes),
+        hash,
         format,
-        processed: Some(processed),
+        processed: Some(processed?),
     })
 }
 
@@ -64,16 +69,37 @@ impl Store {
         caption: &str,
     ) -> Result<PhotoRef> {
         let inspection_id = self.check_owner(attached_to)?;
-        let hash = content_hash(bytes);
-        let prepared = match self.existing_size(&hash)? {
-            Some(_) => PreparedPhoto {
-                format: sniff(bytes)?,
-                hash,
-                processed: None,
-            },
-            None => prepare_photo(bytes)?,
+        sniff(bytes)?;
+        // The original is written and synced while the photo is hashed and decoded; it gets
+        // its name (the hash) once that is known.
+        let files = &self.photos;
+        let keep = self.keep_originals == KeepOriginals::Yes;
+        let (staged, prepared) = std::thread::scope(|s| {
+            let staged = keep.then(|| s.spawn(|| files.stage(Kind::Original, bytes)));
+            let prepared = prepare_photo(bytes);
+            let staged = staged.map(|t| t.join().expect("a file write does not panic"));
+            (staged, prepared)
+        });
+        let staged = staged.transpose()?;
+        let mut prepared = match prepared {
+            Ok(p) => p,
+            Err(e) => {
+                staged.map(super::files::Staged::discard);
+                return Err(e);
+            }
         };
-        self.store_prepared(&inspection_id, attached_to, bytes, &prepared, caption)
+        if self.existing_size(&prepared.hash)?.is_some() {
+            // The same photo is already here, made from its verified original.
+            prepared.processed = None;
+        }
+        self.store_prepared(
+            &inspection_id,
+            attached_to,
+            bytes,
+            &prepared,
+            caption,
+            staged,
+        )
     }
 
     /// Stores a photo prepared by `prepare_photo` (which may run on other threads).
@@ -85,7 +111,7 @@ impl Store {
         caption: &str,
     ) -> Result<PhotoRef> {
         let inspection_id = self.check_owner(attached_to)?;
-        self.store_prepared(&inspection_id, attached_to, bytes, prepared, caption)
+        self.store_prepared(&inspection_id, attached_to, bytes, prepared, caption, None)
     }
 
     /// Writes the prepared photo's files durably, then its row (the owner already checked).
@@ -96,28 +122,54 @@ impl Store {
         bytes: &[u8],
         prepared: &PreparedPhoto,
         caption: &str,
+        staged: Option<super::files::Staged>,
     ) -> Result<PhotoRef> {
         let inspection_id = inspection_id.to_string();
         let hash = &prepared.hash;
-        let (width, height) = match &prepared.processed {
-            Some(processed) => {
-                self.photos
-                    .replace(Kind::Thumb, hash, "jpg", &processed.thumb_jpeg)?;
-                self.photos
-                    .replace(Kind::Report, hash, "jpg", &processed.report_jpeg)?;
-                (processed.report_width, processed.report_height)
-            }
+        // The three files are written (and synced) on their own threads, so their fsyncs
+        // overlap; the row is written only once all three are durable.
+        let keep_original = self.keep_originals == KeepOriginals::Yes;
+        let files = &self.photos;
+        let ext = prepared.format.extension();
+        let (images, original) = std::thread::scope(|s| {
+            let original = keep_original.then(|| {
+                s.spawn(move || match staged {
+                    Some(staged) => files.commit(staged, Kind::Original, hash, ext),
+                    None => files.put(Kind::Original, hash, ext, bytes),
+                })
+            });
+            let images = match &prepared.processed {
+                Some(processed) => {
+                    let thumb = s.spawn(move || {
+                        files.replace(Kind::Thumb, hash, "jpg", &processed.thumb_jpeg)
+                    });
+                    let report = files.replace(Kind::Report, hash, "jpg", &processed.report_jpeg);
+                    let thumb = thumb.join().expect("a file write does not panic");
+                    Some(
+                        report
+                            .and(thumb)
+                            .map(|_| (processed.report_width, processed.report_height)),
+                    )
+                }
+                None => None,
+            };
+            (
+                images,
+                original.map(|t| t.join().expect("a file write does not panic")),
+            )
+        });
+        let (width, height) = match images {
+            Some(written) => written?,
             None => self.existing_size(hash)?.ok_or_else(|| {
                 StoreError::Invalid("the photo's stored images are missing".into())
             })?,
         };
-        let original_ext = match self.keep_originals {
-            KeepOriginals::Yes => {
-                self.photos
-                    .put(Kind::Original, hash, prepared.format.extension(), bytes)?;
-                Some(prepared.format.extension())
+        let original_ext = match original {
+            Some(written) => {
+                written?;
+                Some(ext)
             }
-            KeepOriginals::No => None,
+            None => None,
         };
         let id = super::new_id();
         let file = format!("photos/{hash}.jpg");
