@@ -84,7 +84,9 @@ impl Store {
         let mut prepared = match prepared {
             Ok(p) => p,
             Err(e) => {
-                staged.map(super::files::Staged::discard);
+                if let Some(staged) = staged {
+                    staged.discard();
+                }
                 return Err(e);
             }
         };
