@@ -169,3 +169,22 @@ fn hostile_files_are_refused_within_the_budget() {
     );
     assert!(kib < BUDGET_KIB, "import: peak {kib} KiB");
 }
+
+/// `check --json` on a generated 20,000-member inspection is written as a stream: its peak is
+/// the inspection and its findings, not the text on top of them.
+#[test]
+fn a_large_check_streams_its_output() {
+    let t = Temp::new("large");
+    let inspection = undercroft_core::generate::inspection_with_members(20_000);
+    let file = t.0.join("large.json");
+    std::fs::write(&file, undercroft_core::interchange::to_json(&inspection)).unwrap();
+    drop(inspection);
+    for args in [vec!["check", "--json"], vec!["check"]] {
+        let mut args = args;
+        args.push(file.to_str().unwrap());
+        let (ok, kib, err) = peak(&args);
+        assert!(ok, "{err}");
+        eprintln!("{args:?}: peak {kib} KiB");
+        assert!(kib < BUDGET_KIB, "{args:?}: peak {kib} KiB");
+    }
+}

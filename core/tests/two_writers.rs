@@ -160,4 +160,20 @@ fn photos_added_while_another_process_opens_the_store_keep_their_files() {
         "{}",
         String::from_utf8_lossy(&o.stderr)
     );
+    let bundle = t.0.join("b.zip");
+    let o = undercroft(
+        &db,
+        &[
+            "export",
+            "0193a1c2-7d00-7000-8000-00000000d001",
+            "-o",
+            bundle.to_str().unwrap(),
+        ],
+    );
+    assert!(o.status.success());
+    assert!(
+        String::from_utf8_lossy(&o.stderr).contains("has no image file in the store"),
+        "{}",
+        String::from_utf8_lossy(&o.stderr)
+    );
 }

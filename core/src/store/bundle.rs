@@ -8,7 +8,7 @@ use super::clock::now_utc;
 use super::files::{content_hash, is_hash, write_durably, Kind, PhotoFiles};
 use super::notes::FindingNote;
 use super::save;
-use super::{Result, Store, StoreError};
+use super::{Result, Store, StoreError, StoredPhoto};
 use crate::interchange;
 use crate::model::{renumber, Inspection};
 use crate::photo::{self, sniff, SourceFormat};
@@ -102,8 +102,10 @@ impl Store {
         self.load_inspection(id)
     }
 
-    /// Writes one inspection and its photos to a bundle file, durably.
-    pub fn export_bundle(&self, inspection_id: &str, path: &Path) -> Result<()> {
+    /// Writes one inspection and its photos to a bundle file, durably. Returns the photos
+    /// whose image files are missing from the store (their rows go in the bundle without
+    /// images), for the caller to say so.
+    pub fn export_bundle(&self, inspection_id: &str, path: &Path) -> Result<Vec<StoredPhoto>> {
         let inspection = self.load_inspection(inspection_id)?;
         let notes = self.finding_notes(inspection_id)?;
         let mut zip = zip::ZipWriter::new(std::io::Cursor::new(Vec::new()));
@@ -115,7 +117,11 @@ impl Store {
         zip.start_file("notes.json", json).map_err(zip_err)?;
         zip.write_all(serde_json::to_string_pretty(&notes)?.as_bytes())?;
         let mut written = std::collections::HashSet::new();
+        let mut missing = Vec::new();
         for p in self.photos_of_inspection(inspection_id)? {
+            if p.report_path.is_none() {
+                missing.push(p.clone());
+            }
             let Some(hash) = p.hash.filter(|h| written.insert(h.clone())) else {
                 continue;
             };
@@ -139,7 +145,7 @@ impl Store {
         }
         let bytes = zip.finish().map_err(zip_err)?.into_inner();
         write_durably(path, &bytes)?;
-        Ok(())
+        Ok(missing)
     }
 
     /// Reads a bundle into the store (replacing an inspection with the same id).

@@ -3,7 +3,8 @@
 
 use anyhow::Context;
 use clap::Args;
-use serde_json::json;
+use serde::Serialize;
+use std::io::Write;
 use std::path::PathBuf;
 use undercroft_core::finding::benchmark_note;
 use undercroft_core::finding::Bound;
@@ -37,25 +38,47 @@ pub fn run(args: &CheckArgs, db: Option<&std::path::Path>) -> anyhow::Result<()>
         (None, None) => anyhow::bail!("give an inspection file or --inspection ID"),
     };
     let evaluation = evaluate(&inspection);
+    // Both outputs are written as a stream: a 20,000-member inspection's text is never
+    // held whole in memory.
+    let mut out = std::io::BufWriter::new(std::io::stdout().lock());
     if args.json {
-        let out = json!({
-            "inspection_id": inspection.id,
-            "code_edition": inspection.code_edition,
-            "notice": SCREENING_NOTICE,
-            "benchmark": benchmark_note(&inspection.code_edition, inspection.property.year_built),
-            "counts": evaluation.counts(),
-            "findings": evaluation.findings,
-            "problems": evaluation.problems,
-        });
-        println!("{}", serde_json::to_string_pretty(&out)?);
-        return Ok(());
+        let report = JsonOut {
+            inspection_id: &inspection.id,
+            code_edition: &inspection.code_edition,
+            notice: SCREENING_NOTICE,
+            benchmark: benchmark_note(&inspection.code_edition, inspection.property.year_built),
+            counts: evaluation.counts(),
+            findings: &evaluation.findings,
+            problems: &evaluation.problems,
+        };
+        serde_json::to_writer_pretty(&mut out, &report)?;
+        writeln!(out)?;
+    } else {
+        write_text(&mut out, &inspection, &evaluation)?;
     }
-    print!("{}", render_text(&inspection, &evaluation));
+    out.flush()?;
     Ok(())
 }
 
-/// The terminal rendering: header, counts, findings over limit first, input problems, notice.
-pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evaluation) -> String {
+/// The JSON output, serialized straight to the terminal.
+#[derive(Serialize)]
+struct JsonOut<'a> {
+    inspection_id: &'a str,
+    code_edition: &'a str,
+    notice: &'a str,
+    benchmark: Option<String>,
+    counts: undercroft_core::engine::Counts,
+    findings: &'a [Finding],
+    problems: &'a [undercroft_core::validate::Problem],
+}
+
+/// The terminal rendering: header, counts, findings over limit first, input problems, notice;
+/// each finding written as soon as it is worded.
+fn write_text(
+    w: &mut impl Write,
+    inspection: &Inspection,
+    evaluation: &undercroft_core::Evaluation,
+) -> std::io::Result<()> {
     let mut out = String::new();
     let line = |out: &mut String, text: String| {
         out.push_str(&text);
@@ -84,8 +107,12 @@ pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evalua
         line(&mut out, format!("{note}."));
     }
     line(&mut out, format!("{}\n", evaluation.counts().text()));
+    w.write_all(out.as_bytes())?;
+    out.clear();
     for f in evaluation.by_attention() {
         finding_text(&mut out, f);
+        w.write_all(out.as_bytes())?;
+        out.clear();
     }
     if !evaluation.problems.is_empty() {
         line(&mut out, "Input problems:".into());
@@ -95,7 +122,7 @@ pub fn render_text(inspection: &Inspection, evaluation: &undercroft_core::Evalua
         out.push('\n');
     }
     line(&mut out, SCREENING_NOTICE.into());
-    out
+    w.write_all(out.as_bytes())
 }
 
 fn finding_text(out: &mut String, f: &Finding) {

@@ -188,7 +188,12 @@ pub fn export(args: &ExportArgs, db: Option<&Path>) -> anyhow::Result<()> {
         write_durably(&args.output, to_json(&inspection).as_bytes())
             .with_context(|| format!("cannot write {}", args.output.display()))?;
     } else {
-        store.export_bundle(&args.id, &args.output)?;
+        for p in store.export_bundle(&args.id, &args.output)? {
+            eprintln!(
+                "warning: photo {} ({}) has no image file in the store; the bundle holds its row without the image",
+                p.id, p.caption
+            );
+        }
     }
     println!("wrote {}", args.output.display());
     Ok(())
