@@ -177,3 +177,38 @@ fn photos_added_while_another_process_opens_the_store_keep_their_files() {
         String::from_utf8_lossy(&o.stderr)
     );
 }
+
+/// A report killed at any moment leaves the PDF already at the output path whole: the new
+/// one is written under a temporary name and renamed.
+#[test]
+fn a_killed_report_never_leaves_a_cut_short_pdf() {
+    let t = Temp::new("killed");
+    let pdf = t.0.join("report.pdf");
+    let out = pdf.to_str().unwrap().to_string();
+    let first = Command::new(env!("CARGO_BIN_EXE_undercroft"))
+        .args(["report", &demo(), "-o", &out])
+        .output()
+        .unwrap();
+    assert!(first.status.success());
+    let whole = |bytes: &[u8]| {
+        bytes.starts_with(b"%PDF-") && bytes.windows(5).rev().take(64).any(|w| w == b"%%EOF")
+    };
+    assert!(whole(&std::fs::read(&pdf).unwrap()));
+    for trial in 0..16u64 {
+        let mut child = Command::new(env!("CARGO_BIN_EXE_undercroft"))
+            .args(["report", &demo(), "-o", &out])
+            .stdout(std::process::Stdio::null())
+            .stderr(std::process::Stdio::null())
+            .spawn()
+            .unwrap();
+        std::thread::sleep(std::time::Duration::from_millis(trial * 37 % 400));
+        let _ = child.kill();
+        let _ = child.wait();
+        let bytes = std::fs::read(&pdf).unwrap();
+        assert!(
+            whole(&bytes),
+            "trial {trial}: {} bytes, not a whole PDF",
+            bytes.len()
+        );
+    }
+}
