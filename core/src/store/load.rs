@@ -9,7 +9,23 @@ type StoredMember = (String, String, Framing, Vec<Observation>);
 
 impl Store {
     /// The whole inspection as the engine's model (and the interchange format).
+    /// Reads an inspection whole, inside one read transaction: a consistent snapshot even
+    /// while another process commits changes between the reads of its rows.
     pub fn load_inspection(&self, id: &str) -> Result<Inspection> {
+        if !self.conn.is_autocommit() {
+            return self.read_inspection(id);
+        }
+        self.conn.execute_batch("BEGIN DEFERRED")?;
+        let read = self.read_inspection(id);
+        let end = self
+            .conn
+            .execute_batch(if read.is_ok() { "COMMIT" } else { "ROLLBACK" });
+        let inspection = read?;
+        end?;
+        Ok(inspection)
+    }
+
+    fn read_inspection(&self, id: &str) -> Result<Inspection> {
         let mut inspection = self
             .conn
             .query_row(
