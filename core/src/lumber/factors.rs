@@ -91,6 +91,17 @@ pub fn wet_service(fb_times_cf: f64) -> WetFactors {
     }
 }
 
+/// Wet service factor for Fc of a member whose Fc x CF is `fc_times_cf`.
+/// Source: NDS Supplement (2018) Table 4A adjustment factors: Fc 0.8, or 1.0 when
+/// Fc x CF <= 750 psi (the same in an open-source tabulation of Table 4A, checked against it).
+pub fn wet_service_fc(fc_times_cf: f64) -> f64 {
+    if fc_times_cf <= 750.0 {
+        1.0
+    } else {
+        0.8
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

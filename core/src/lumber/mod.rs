@@ -8,7 +8,7 @@ mod species;
 
 pub use design_values::{design_values, DesignValues, DESIGN_VALUES_SOURCE};
 pub use factors::{
-    load_duration_factor, size_factor_fb, wet_service, LoadDuration, WetFactors,
+    load_duration_factor, size_factor_fb, wet_service, wet_service_fc, LoadDuration, WetFactors,
     REPETITIVE_MEMBER_FACTOR,
 };
 pub use grade::{Grade, GradeChoice, UNKNOWN_GRADE_DEFAULT};
