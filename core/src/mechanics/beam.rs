@@ -58,7 +58,8 @@ impl BeamChecks {
 pub fn check_beam(input: &BeamInput) -> Option<BeamChecks> {
     let design = design_values(input.species, input.grade, input.ply)?;
     let span = input.span.in_inches();
-    if !(span > 0.0) || input.plies == 0 || !(input.total_plf >= input.live_plf) {
+    let loads_read = input.total_plf.is_finite() && input.total_plf >= input.live_plf;
+    if !span.is_finite() || span <= 0.0 || input.plies == 0 || !loads_read {
         return None;
     }
     let section = input.ply.dressed_section();
