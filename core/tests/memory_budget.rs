@@ -1,30 +1,14 @@
 //! Every command stays under 256 MiB on hostile input: each case runs the real binary and
 //! reads the child's peak resident memory from wait4's rusage.
 
+mod common;
+use common::Temp;
 use std::io::Write;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::process::{Command, Stdio};
 
 /// The budget of the store issue: no single command above 256 MiB.
 const BUDGET_KIB: i64 = 256 * 1024;
-
-struct Temp(PathBuf);
-
-impl Temp {
-    fn new(name: &str) -> Temp {
-        let dir =
-            std::env::temp_dir().join(format!("undercroft-mem-{name}-{}", std::process::id()));
-        let _ = std::fs::remove_dir_all(&dir);
-        std::fs::create_dir_all(&dir).unwrap();
-        Temp(dir)
-    }
-}
-
-impl Drop for Temp {
-    fn drop(&mut self) {
-        let _ = std::fs::remove_dir_all(&self.0);
-    }
-}
 
 /// Runs the command and returns (success, peak RSS in KiB, stderr). The child is reaped by
 /// wait4 (which also gives its rusage), not by `Child::wait`.
@@ -57,7 +41,7 @@ fn peak(args: &[&str]) -> (bool, i64, String) {
 
 fn store_with_demo(t: &Temp) -> String {
     let db = t.0.join("store.sqlite").display().to_string();
-    let demo = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("../demo-data/demo-inspection.json");
+    let demo = common::demo_file();
     let (ok, _, err) = peak(&["--db", &db, "import", demo.to_str().unwrap()]);
     assert!(ok, "{err}");
     db
@@ -106,7 +90,7 @@ fn png16_bomb(path: &Path) {
 
 #[test]
 fn hostile_photos_are_refused_within_the_budget() {
-    let t = Temp::new("photos");
+    let t = Temp::new("mem-photos");
     let db = store_with_demo(&t);
     let jpeg = t.0.join("bomb.jpg");
     progressive_bomb(&jpeg);
@@ -127,7 +111,7 @@ fn hostile_photos_are_refused_within_the_budget() {
 
 #[test]
 fn hostile_files_are_refused_within_the_budget() {
-    let t = Temp::new("files");
+    let t = Temp::new("mem-files");
     let sparse = t.0.join("sparse.json");
     std::fs::File::create(&sparse)
         .unwrap()
@@ -142,10 +126,7 @@ fn hostile_files_are_refused_within_the_budget() {
     let mut zip = zip::ZipWriter::new(std::fs::File::create(&bundle).unwrap());
     let deflated = zip::write::SimpleFileOptions::default()
         .compression_method(zip::CompressionMethod::Deflated);
-    let demo = std::fs::read(
-        PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("../demo-data/demo-inspection.json"),
-    )
-    .unwrap();
+    let demo = std::fs::read(common::demo_file()).unwrap();
     zip.start_file("inspection.json", deflated).unwrap();
     zip.write_all(&demo).unwrap();
     let chunk = vec![0u8; 1 << 20];
@@ -174,7 +155,7 @@ fn hostile_files_are_refused_within_the_budget() {
 /// the inspection and its findings, not the text on top of them.
 #[test]
 fn a_large_check_streams_its_output() {
-    let t = Temp::new("large");
+    let t = Temp::new("mem-large");
     let inspection = undercroft_core::generate::inspection_with_members(20_000);
     let file = t.0.join("large.json");
     std::fs::write(&file, undercroft_core::interchange::to_json(&inspection)).unwrap();

@@ -1,7 +1,9 @@
 //! Two processes on one store, as the release command is used: writers take turns (no
 //! "database is locked"), and a reader's open never removes another process's new photos.
 
-use std::path::{Path, PathBuf};
+mod common;
+use common::Temp;
+use std::path::Path;
 use std::process::{Command, Output};
 use undercroft_core::store::Store;
 
@@ -14,29 +16,8 @@ fn undercroft(db: &str, args: &[&str]) -> Output {
         .expect("the binary runs")
 }
 
-struct Temp(PathBuf);
-
-impl Temp {
-    fn new(name: &str) -> Temp {
-        let dir =
-            std::env::temp_dir().join(format!("undercroft-two-{name}-{}", std::process::id()));
-        let _ = std::fs::remove_dir_all(&dir);
-        std::fs::create_dir_all(&dir).unwrap();
-        Temp(dir)
-    }
-}
-
-impl Drop for Temp {
-    fn drop(&mut self) {
-        let _ = std::fs::remove_dir_all(&self.0);
-    }
-}
-
 fn demo() -> String {
-    PathBuf::from(env!("CARGO_MANIFEST_DIR"))
-        .join("../demo-data/demo-inspection.json")
-        .display()
-        .to_string()
+    common::demo_file().display().to_string()
 }
 
 /// A small PNG of its own colour, so every photo has its own hash.
@@ -59,7 +40,7 @@ fn failures(outputs: Vec<Output>) -> Vec<String> {
 
 #[test]
 fn two_importers_take_turns() {
-    let t = Temp::new("import");
+    let t = Temp::new("two-import");
     let db = t.0.join("store.sqlite").display().to_string();
     let runs: Vec<_> = (0..2)
         .map(|_| {
@@ -84,7 +65,7 @@ fn two_importers_take_turns() {
 
 #[test]
 fn photos_added_while_another_process_opens_the_store_keep_their_files() {
-    let t = Temp::new("photos");
+    let t = Temp::new("two-photos");
     let db = t.0.join("store.sqlite").display().to_string();
     assert!(undercroft(&db, &["import", &demo()]).status.success());
     let files: Vec<String> = (0..24).map(|n| photo(&t.0, n)).collect();
@@ -182,7 +163,7 @@ fn photos_added_while_another_process_opens_the_store_keep_their_files() {
 /// one is written under a temporary name and renamed.
 #[test]
 fn a_killed_report_never_leaves_a_cut_short_pdf() {
-    let t = Temp::new("killed");
+    let t = Temp::new("two-killed");
     let pdf = t.0.join("report.pdf");
     let out = pdf.to_str().unwrap().to_string();
     let first = Command::new(env!("CARGO_BIN_EXE_undercroft"))
