@@ -289,6 +289,13 @@ fn area_section(
             .position(|f| f.rule_id() == "joist-span" && f.place.member_id == o.place.member_id);
         findings.insert(after.map_or(findings.len(), |p| p + 1), o);
     }
+    // The inspector's notes on the area's observations, by observation id, looked up once.
+    let seen_notes: HashMap<&str, &str> = ctxs
+        .iter()
+        .flat_map(|c| c.observations.iter())
+        .map(|o| (&*o.id, o.note.trim()))
+        .filter(|(_, note)| !note.is_empty())
+        .collect();
     let blocks = findings
         .iter()
         .map(|f| {
@@ -297,13 +304,10 @@ fn area_section(
                     (f.rule_id() == "joist-span").then(|| f.place.member_id.to_string())
                 });
             let photos = owner.map(|o| photos_of(&o, placed)).unwrap_or_default();
-            let seen = f.observation_id.as_deref().and_then(|id| {
-                ctxs.iter()
-                    .flat_map(|c| c.observations.iter())
-                    .find(|o| &*o.id == id)
-                    .map(|o| o.note.trim())
-                    .filter(|n| !n.is_empty())
-            });
+            let seen = f
+                .observation_id
+                .as_deref()
+                .and_then(|id| seen_notes.get(id).copied());
             finding_block(f, notes, seen, photos)
         })
         .collect();

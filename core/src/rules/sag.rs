@@ -69,8 +69,6 @@ pub struct SagDetail {
     /// The n of the L/n reference.
     pub denominator: f64,
     pub readings: usize,
-    /// Readings beyond the clear span, left out.
-    pub outside: usize,
 }
 
 fn one(
@@ -98,7 +96,6 @@ fn one(
         span,
         denominator,
         readings: readings.len(),
-        outside: readings.iter().filter(|r| r.at > span).count(),
     };
     b.check(Check::numeric(
         "largest sag",
@@ -128,20 +125,13 @@ impl Wording for SagDetail {
     }
 
     fn assumptions(&self, _: UnitSystem) -> Vec<String> {
-        let mut out = vec![
+        vec![
             format!(
                 "L/{:.0} in Table R301.7 limits the calculated deflection under live load; a measured sag also holds creep, shrinkage and how the joist was installed, so this comparison is a reference, not a code violation",
                 self.denominator
             ),
             format!("{} reading(s) along a line stretched between the bearings", self.readings),
-        ];
-        if self.outside > 0 {
-            out.push(format!(
-                "{} reading(s) beyond the clear span were left out",
-                self.outside
-            ));
-        }
-        out
+        ]
     }
 
     fn recommendation(&self, status: Status, _: UnitSystem) -> String {

@@ -93,7 +93,6 @@ impl Store {
     /// Puts an inspection read from an interchange file into the store (replacing one with the
     /// same id). Photo references keep their file names; their images come with a bundle.
     pub fn import_inspection(&mut self, inspection: &Inspection) -> Result<ImportOutcome> {
-        self.refuse_foreign_ids(inspection)?;
         self.replace(inspection, &[])
     }
 
@@ -192,8 +191,6 @@ impl Store {
                 note.key = renumber::renumbered_key(&note.key, &map);
             }
             inspection = copy;
-        } else {
-            self.refuse_foreign_ids(&inspection)?;
         }
         let originals: HashSet<&str> = survey
             .images
@@ -235,8 +232,8 @@ impl Store {
         Ok(self.replace(&inspection, &notes)?)
     }
 
-    /// Refuses an inspection some of whose inner ids belong to another stored inspection,
-    /// naming it (replacing would take them from it).
+    /// Names the stored inspection that holds one of this inspection's inner ids: called only
+    /// when the rows' insert met a taken id, so the happy path pays nothing for it.
     fn refuse_foreign_ids(&self, inspection: &Inspection) -> Result<()> {
         for id in renumber::ids_of(inspection).into_iter().skip(1) {
             match self.inspection_of(id) {
@@ -269,8 +266,26 @@ impl Store {
         self.replace(&copy, &[])
     }
 
-    /// Replaces (or creates) the inspection with this id, in one transaction.
+    /// Replaces (or creates) the inspection with this id, in one transaction. An inner id
+    /// that another stored inspection holds is refused with that inspection named, not with
+    /// SQLite's constraint message.
     fn replace(&mut self, inspection: &Inspection, notes: &[FindingNote]) -> Result<ImportOutcome> {
+        match self.replace_rows(inspection, notes) {
+            Err(StoreError::Sql(e))
+                if e.sqlite_error_code() == Some(rusqlite::ErrorCode::ConstraintViolation) =>
+            {
+                self.refuse_foreign_ids(inspection)?;
+                Err(StoreError::Sql(e))
+            }
+            other => other,
+        }
+    }
+
+    fn replace_rows(
+        &mut self,
+        inspection: &Inspection,
+        notes: &[FindingNote],
+    ) -> Result<ImportOutcome> {
         let tx = self
             .conn
             .transaction_with_behavior(rusqlite::TransactionBehavior::Immediate)?;
