@@ -46,6 +46,7 @@ fn cells() -> Vec<Cell> {
                 dead: Psf(num(3)),
                 deflection_denominator: num(4),
                 wet_service: false,
+                incised: false,
                 duration: LoadDuration::TenYears,
                 repetitive: true,
             },

@@ -45,6 +45,8 @@ pub fn inspection_with_members(members: usize) -> Inspection {
                     interval: Some(Length::inches(60.0 + (n % 60) as f64)),
                 }),
                 loads: Default::default(),
+                ground_clearance: None,
+                treated: None,
             };
             made += 1;
             let joists = (0..9.min(members - made))
@@ -65,6 +67,7 @@ pub fn inspection_with_members(members: usize) -> Inspection {
                 framing,
                 observations: vec![],
                 joists,
+                bears_on: vec![],
             });
         }
         areas.push(Area {
@@ -74,6 +77,8 @@ pub fn inspection_with_members(members: usize) -> Inspection {
             loads: LoadSettings::default(),
             runs,
             members: vec![],
+            girders: vec![],
+            conditions: Default::default(),
             notes: String::new(),
         });
     }

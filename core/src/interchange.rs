@@ -85,33 +85,17 @@ fn check_ids(inspection: &Inspection) -> Result<()> {
         return Err(InterchangeError::EmptyId("the inspection".into()));
     }
     let mut seen = HashSet::new();
-    let mut add = |id: &str| {
+    for id in crate::model::renumber::ids_of(inspection).into_iter().skip(1) {
         if id.trim().is_empty() {
-            Err(InterchangeError::EmptyId(
-                "an area, run, joist, member, observation or photo".into(),
-            ))
-        } else if seen.insert(id.to_string()) {
-            Ok(())
-        } else {
-            Err(InterchangeError::DuplicateId(id.to_string()))
+            return Err(InterchangeError::EmptyId(
+                "an area, run, joist, member, girder, post, observation or photo".into(),
+            ));
         }
-    };
-    for area in &inspection.areas {
-        add(&area.id)?;
-        for run in &area.runs {
-            add(&run.id)?;
-            run.observations.iter().try_for_each(|o| add(&o.id))?;
-            for joist in &run.joists {
-                add(&joist.id)?;
-                joist.observations.iter().try_for_each(|o| add(&o.id))?;
-            }
-        }
-        for member in &area.members {
-            add(&member.id)?;
-            member.observations.iter().try_for_each(|o| add(&o.id))?;
+        if !seen.insert(id) {
+            return Err(InterchangeError::DuplicateId(id.to_string()));
         }
     }
-    inspection.photos.iter().try_for_each(|p| add(&p.id))
+    Ok(())
 }
 
 #[cfg(test)]

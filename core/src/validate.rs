@@ -5,7 +5,8 @@ use crate::finding::Place;
 use crate::lumber::{GradeChoice, LoadDuration, Section, Species};
 use crate::mechanics::{allowable_span, SpanInput, SpanResult};
 use crate::model::{
-    Framing, Inspection, LoadSettings, MemberKind, Observation, ObservationKind, ResolvedLoads,
+    AreaKind, Framing, Inspection, LoadSettings, MemberKind, Observation, ObservationKind,
+    ResolvedLoads, SiteConditions,
 };
 use crate::units::{Length, UnitSystem};
 use serde::Serialize;
@@ -121,12 +122,23 @@ pub struct MemberContext<'a> {
     pub moisture_from_run: bool,
     /// The year the house was built, where known (the code edition is then a benchmark).
     pub year_built: Option<u16>,
+    /// Porch or deck framing, open to the weather: wet service whatever the meter says.
+    pub exterior: bool,
+    /// Exterior framing of a species incised for treatment (all but southern pine), as
+    /// the deck tables assume.
+    pub incised: bool,
+    /// Standing water or fungal growth recorded in the area, where no moisture reading was
+    /// taken on the member: wet service is then not ruled out.
+    pub wetting_unmeasured: Option<&'static str>,
 }
 
 impl MemberContext<'_> {
+    /// Wet service: a reading above 19 %, or exterior (porch or deck) framing.
     pub fn is_wet(&self) -> bool {
-        self.moisture_percent
-            .is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT)
+        self.exterior
+            || self
+                .moisture_percent
+                .is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT)
     }
     pub fn clear_span(&self) -> Option<Length> {
         self.framing.clear_span
@@ -200,6 +212,8 @@ pub fn members(inspection: &Inspection) -> (Vec<MemberContext<'_>>, Vec<Problem>
         }
         let base = Shared {
             inspection,
+            kind: area.kind,
+            conditions: area.conditions,
             area_id: Arc::from(area.id.as_str()),
             edition: edition.clone(),
             area_loads,
@@ -269,6 +283,8 @@ impl Role {
 
 struct Shared<'a> {
     inspection: &'a Inspection,
+    kind: AreaKind,
+    conditions: SiteConditions,
     area_id: Arc<str>,
     edition: Arc<str>,
     area_loads: LoadSettings,
@@ -380,7 +396,18 @@ impl<'a> Shared<'a> {
         let spacing = layout.or(taped);
         let spacing_taped =
             taped.filter(|t| layout.is_some_and(|l| (*t - l).in_inches().abs() > 1e-9));
-        let wet = moisture_percent.is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT);
+        let exterior = self.kind == AreaKind::Porch;
+        let incised = exterior
+            && framing.treated != Some(false)
+            && lumber
+                .as_ref()
+                .is_some_and(|l| l.species != Species::SouthernPine);
+        let wet = exterior || moisture_percent.is_some_and(|mc| mc > WET_SERVICE_MC_PERCENT);
+        let wetting_unmeasured = moisture_percent
+            .is_none()
+            .then(|| self.conditions.signs_of_wetting())
+            .flatten()
+            .filter(|_| !exterior);
         let span = match (&lumber, spacing) {
             (Some(l), Some(spacing)) => allowable_span(&SpanInput {
                 species: l.species,
@@ -391,6 +418,7 @@ impl<'a> Shared<'a> {
                 dead: loads.dead,
                 deflection_denominator: loads.deflection_denominator,
                 wet_service: wet,
+                incised,
                 duration: LoadDuration::TenYears,
                 repetitive: true,
             }),
@@ -420,6 +448,9 @@ impl<'a> Shared<'a> {
             spacing_taped,
             moisture_from_run,
             year_built: self.inspection.property.year_built,
+            exterior,
+            incised,
+            wetting_unmeasured,
         }
     }
 }

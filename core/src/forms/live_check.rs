@@ -71,6 +71,7 @@ pub fn live_check(form: &FramingForm, loads: &ResolvedLoads, units: UnitSystem) 
         dead: loads.dead,
         deflection_denominator: loads.deflection_denominator,
         wet_service: false,
+        incised: false,
         duration: LoadDuration::TenYears,
         repetitive: true,
     }) else {

@@ -6,7 +6,7 @@ mod beam;
 mod column;
 mod span;
 
-pub use beam::{check_beam, BeamChecks, BeamInput};
+pub use beam::{check_beam, reactions, BeamChecks, BeamInput, IncisingFactors, INCISED};
 
 pub use column::{
     column_stability_factor, post_capacity, size_factor_fc, PostCapacity, PostInput,

@@ -39,6 +39,8 @@ pub struct SpanInput {
     /// The n of L/n for live-load deflection (360 for floors, Table R301.7).
     pub deflection_denominator: f64,
     pub wet_service: bool,
+    /// Incised for preservative treatment (NDS 2018 Table 4.3.8).
+    pub incised: bool,
     pub duration: LoadDuration,
     /// Three or more members at most 24 in apart sharing the load (Cr applies).
     pub repetitive: bool,
@@ -107,9 +109,14 @@ pub fn allowable_span(input: &SpanInput) -> Option<SpanResult> {
         WetFactors::DRY
     };
 
-    let fb = design.fb.0 * cd * wet.fb * cf * cr;
-    let fv = design.fv.0 * cd * wet.fv;
-    let e = design.e.0 * wet.e;
+    let ci = if input.incised {
+        super::INCISED
+    } else {
+        super::IncisingFactors::NONE
+    };
+    let fb = design.fb.0 * cd * wet.fb * cf * cr * ci.strength;
+    let fv = design.fv.0 * cd * wet.fv * ci.strength;
+    let e = design.e.0 * wet.e * ci.stiffness;
     let fc_perp = design.fc_perp.0 * wet.fc_perp;
 
     let w_live = input.live.line_load_lb_per_in(input.spacing);
@@ -205,6 +212,7 @@ mod tests {
             dead: Psf(10.0),
             deflection_denominator: 360.0,
             wet_service,
+            incised: false,
             duration: LoadDuration::TenYears,
             repetitive: true,
         }

@@ -160,6 +160,13 @@ pub struct Framing {
     /// Loads where the room above differs from its area's (a family room in a sleeping area).
     #[serde(default, skip_serializing_if = "LoadSettings::is_unset")]
     pub loads: LoadSettings,
+    /// Least distance from the joists' bottom edges to exposed ground.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub ground_clearance: Option<Length>,
+    /// Naturally durable or preservative-treated wood (a stamp or the green or brown tint
+    /// of treatment seen).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub treated: Option<bool>,
 }
 
 impl Framing {
@@ -177,6 +184,8 @@ impl Framing {
             end_restraint: self.end_restraint.or(base.end_restraint),
             bridging: self.bridging.or(base.bridging),
             loads: self.loads.over(&base.loads),
+            ground_clearance: self.ground_clearance.or(base.ground_clearance),
+            treated: self.treated.or(base.treated),
         }
     }
 }

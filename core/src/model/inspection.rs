@@ -1,13 +1,15 @@
 //! The inspection record and its tree: areas hold joist runs and single members.
 
-use super::{Framing, LoadSettings, Observation};
+use super::{Framing, GirderLine, LoadSettings, Observation, Post, SiteConditions};
 use crate::units::UnitSystem;
 use serde::{Deserialize, Serialize};
 
 /// The `format` field every interchange file carries.
 pub const FORMAT_NAME: &str = "undercroft-inspection";
 /// The interchange format version this code writes and reads.
-pub const FORMAT_VERSION: u32 = 1;
+/// Version 2 added girder lines, posts, site conditions and the girders a run bears on;
+/// version 1 files read unchanged.
+pub const FORMAT_VERSION: u32 = 2;
 
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -83,6 +85,31 @@ impl Inspection {
         m.framing
             .clear_span
             .or_else(|| m.run.and_then(|r| r.framing.clear_span))
+    }
+
+    /// A girder line and the area it is in.
+    pub fn girder(&self, id: &str) -> Option<(&Area, &GirderLine)> {
+        self.areas
+            .iter()
+            .find_map(|a| a.girders.iter().find(|g| g.id == id).map(|g| (a, g)))
+    }
+
+    /// A post, its girder line and its area.
+    pub fn post(&self, id: &str) -> Option<(&Area, &GirderLine, &Post)> {
+        self.areas.iter().find_map(|a| {
+            a.girders.iter().find_map(|g| {
+                g.posts.iter().find(|p| p.id == id).map(|p| (a, g, p))
+            })
+        })
+    }
+
+    /// The joist runs that bear on a girder line, with their areas.
+    pub fn runs_on(&self, girder_id: &str) -> Vec<(&Area, &JoistRun)> {
+        self.areas
+            .iter()
+            .flat_map(|a| a.runs.iter().map(move |r| (a, r)))
+            .filter(|(_, r)| r.bears_on.iter().any(|g| g == girder_id))
+            .collect()
     }
 
     pub fn member(&self, id: &str) -> Option<MemberAt<'_>> {
@@ -193,6 +220,12 @@ pub struct Area {
     pub runs: Vec<JoistRun>,
     #[serde(default)]
     pub members: Vec<Member>,
+    /// Girder lines with their posts.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub girders: Vec<GirderLine>,
+    /// Water, ground cover, ventilation, fungal growth, soil.
+    #[serde(default, skip_serializing_if = "SiteConditions::is_unset")]
+    pub conditions: SiteConditions,
     #[serde(default)]
     pub notes: String,
 }
@@ -211,6 +244,9 @@ pub struct JoistRun {
     /// Individual joists of the run with their own values or observations.
     #[serde(default)]
     pub joists: Vec<Joist>,
+    /// Ids of the girder lines the run's joists bear on (half the run's span loads each).
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub bears_on: Vec<String>,
 }
 
 /// One joist of a run: what differs from the run, and what was seen on it.

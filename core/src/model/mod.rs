@@ -1,12 +1,15 @@
-//! The inspection as entered: people, areas, joist runs, single members, observations, photos.
+//! The inspection as entered: people, areas, joist runs, single members, girder lines and
+//! their posts, observations, photos.
 //! This is also the JSON interchange format (see `docs/inspection-format.md`).
 
 mod date;
 mod framing;
 mod inspection;
 mod load;
+mod load_path;
 mod observation;
 pub mod renumber;
+mod site;
 
 pub use date::check_date;
 pub use framing::{
@@ -17,4 +20,9 @@ pub use inspection::{
     Property, FORMAT_NAME, FORMAT_VERSION,
 };
 pub use load::{LoadSettings, ResolvedLoads, RoomUse};
-pub use observation::{DamageCause, Edge, End, Observation, ObservationKind, SagReading};
+pub use load_path::{
+    Footing, GirderKind, GirderLine, PlyFastening, PointLoad, Post, PostBase, PostCondition,
+    PostHold, PostMaterial, SoilClass,
+};
+pub use site::{SiteConditions, VaporRetarder, Ventilation};
+pub use observation::{CantileverLoad, DamageCause, Edge, End, Observation, ObservationKind, SagReading};

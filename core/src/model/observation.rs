@@ -1,4 +1,5 @@
-//! What the inspector saw on a member: notches, holes, bearing, sag, moisture, damage, laps.
+//! What the inspector saw on a member: notches, holes, bearing, sag, moisture, damage, laps,
+//! openings, bearing partitions and cantilevers.
 
 use super::{BearingSupport, EndRestraint};
 use crate::units::Length;
@@ -136,6 +137,58 @@ pub enum ObservationKind {
         #[serde(default)]
         description: String,
     },
+    /// An opening framed in the floor (a stair, a chimney): its header and trimmers.
+    Opening {
+        /// Span of the header joist across the opening.
+        header_span: Length,
+        /// Plies in the header joist and in each trimmer joist.
+        header_plies: u8,
+        trimmer_plies: u8,
+        /// The header hangs on approved hangers at the trimmers.
+        #[serde(default)]
+        hangers: bool,
+        /// Longest tail joist framing into the header.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        tail_length: Option<Length>,
+        /// The tail joists hang on framing anchors or sit on ledger strips at the header.
+        #[serde(default)]
+        tails_supported: bool,
+    },
+    /// A bearing partition above: parallel to the joists (over this joist), or across them
+    /// and set back from the support below.
+    Partition {
+        parallel: bool,
+        /// For a parallel partition: the joist under it is doubled (or a beam carries it).
+        #[serde(default)]
+        doubled: bool,
+        /// For a partition across the joists: its distance from the girder, wall or
+        /// partition below.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        offset: Option<Length>,
+    },
+    /// The joists run past their support as a cantilever.
+    Cantilever {
+        /// Overhang past the face of the support.
+        length: Length,
+        /// The span inside, from that support to the next.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        backspan: Option<Length>,
+        #[serde(default)]
+        carries: CantileverLoad,
+    },
+}
+
+/// What the cantilevered end of the joists carries.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default, Serialize, Deserialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum CantileverLoad {
+    /// The floor only.
+    #[default]
+    FloorOnly,
+    /// An exterior balcony.
+    Balcony,
+    /// A light-frame exterior bearing wall and roof.
+    WallAndRoof,
 }
 
 impl ObservationKind {
@@ -150,6 +203,9 @@ impl ObservationKind {
             ObservationKind::Lap { .. } => "lap",
             ObservationKind::Restraint { .. } => "end restraint",
             ObservationKind::Cut { .. } => "cut",
+            ObservationKind::Opening { .. } => "floor opening",
+            ObservationKind::Partition { .. } => "bearing partition",
+            ObservationKind::Cantilever { .. } => "cantilever",
         }
     }
 }

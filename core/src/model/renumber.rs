@@ -1,6 +1,6 @@
 //! An inspection with every id made new (for importing a copy beside the original): the
-//! inspection, its areas, runs, joists, members, observations and photos, with photo owners
-//! and finding-note keys following their new ids.
+//! inspection, its areas, runs, joists, members, observations, girder lines, posts and photos,
+//! with photo owners, run-to-girder links and finding-note keys following their new ids.
 
 use super::Inspection;
 use std::collections::HashMap;
@@ -22,6 +22,10 @@ pub fn ids_of(i: &Inspection) -> Vec<&str> {
         for member in &area.members {
             out.push(&member.id);
             out.extend(member.observations.iter().map(|o| &*o.id));
+        }
+        for girder in &area.girders {
+            out.push(&girder.id);
+            out.extend(girder.posts.iter().map(|p| p.id.as_str()));
         }
     }
     out.extend(i.photos.iter().map(|p| p.id.as_str()));
@@ -58,6 +62,17 @@ pub fn renumbered(
             member.id = to(&member.id);
             for o in &mut member.observations {
                 o.id = Arc::from(to(&o.id).as_str());
+            }
+        }
+        for run in &mut area.runs {
+            for g in &mut run.bears_on {
+                *g = to(g);
+            }
+        }
+        for girder in &mut area.girders {
+            girder.id = to(&girder.id);
+            for post in &mut girder.posts {
+                post.id = to(&post.id);
             }
         }
     }

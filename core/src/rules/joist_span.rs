@@ -20,11 +20,32 @@ pub const RULE: RuleInfo = RuleInfo {
     basis: Basis::CodeLimit,
 };
 
+/// Porch and deck joists, open to the weather: the deck joist table and wet service.
+pub const DECK_RULE: RuleInfo = RuleInfo {
+    id: "deck-joist-span",
+    title: "Porch or deck joist span",
+    code_section: Some("R507.6, Table R507.6"),
+    other_source: Some("NDS 2018 3.3, 3.4, 3.5; Supplement Table 4A (wet service); Table 4.3.8 (incising)"),
+    basis: Basis::CodeLimit,
+};
+
+/// Source: IRC 2018 Table R507.6 footnote: joist length limited to 18 ft for footing design
+/// (the table's longest cells read 18-0).
+pub const DECK_JOIST_MAX_IN: f64 = 216.0;
+
 /// What a span finding is worded from.
 #[derive(Debug, Clone, PartialEq)]
 pub enum SpanDetail {
     Checked(Box<CheckedSpan>),
     Engineered(MemberKind),
+}
+
+/// How a porch or deck joist was computed.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Exterior {
+    pub incised: bool,
+    /// The table's 18 ft limit governs.
+    pub length_limited: bool,
 }
 
 #[derive(Debug, Clone, PartialEq)]
@@ -47,6 +68,8 @@ pub struct CheckedSpan {
     pub wet_from_run: bool,
     /// The spacing as taped, where it was held to a standard layout.
     pub spacing_taped: Option<Length>,
+    /// Porch or deck framing: wet service always, incised unless southern pine.
+    pub exterior: Option<Exterior>,
     /// Why the case is outside the printed span tables (empty: within them, a code limit).
     pub outside_tables: Vec<&'static str>,
 }
@@ -57,6 +80,9 @@ pub struct CheckedSpan {
 /// SS, No. 1, No. 2, No. 3; 12, 16, 19.2 and 24 in; 30 or 40 psf live with 10 or 20 psf dead;
 /// L/360; dry service (the tables' footnotes), dressed sizes.
 pub fn outside_tables(ctx: &MemberContext) -> Vec<&'static str> {
+    if ctx.exterior {
+        return outside_deck_tables(ctx);
+    }
     let mut out = Vec::new();
     let Some(lumber) = &ctx.lumber else {
         return out;
@@ -103,7 +129,8 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
     if !ctx.report_span {
         return;
     }
-    let b = FindingBuilder::new(&RULE, ctx, None);
+    let rule = if ctx.exterior { &DECK_RULE } else { &RULE };
+    let b = FindingBuilder::new(rule, ctx, None);
     if ctx.kind.is_engineered() {
         out.push(b.not_checked(
             "its span is set by the maker's span tables, not the sawn-lumber tables",
@@ -125,7 +152,14 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
         ));
         return;
     };
-    let allowable = result.allowable_rounded();
+    let outside = outside_tables(ctx);
+    let length_limited =
+        ctx.exterior && outside.is_empty() && result.allowable_span_rounded_in > DECK_JOIST_MAX_IN;
+    let allowable = if length_limited {
+        Length::inches(DECK_JOIST_MAX_IN)
+    } else {
+        result.allowable_rounded()
+    };
     let f = &result.factors;
     let detail = CheckedSpan {
         nominal: lumber.section.nominal,
@@ -145,28 +179,76 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
         lumber: LumberNotes::of(ctx),
         wet: ctx
             .moisture_percent
-            .filter(|_| ctx.is_wet())
+            .filter(|_| ctx.is_wet() && !ctx.exterior)
             .map(|mc| (mc, [f.cm_fb, f.cm_fv, f.cm_e])),
+        exterior: ctx.exterior.then_some(Exterior {
+            incised: ctx.incised,
+            length_limited,
+        }),
         wet_from_run: ctx.moisture_from_run,
         spacing_taped: ctx.spacing_taped,
-        outside_tables: outside_tables(ctx),
+        outside_tables: outside,
     };
     let basis = if detail.outside_tables.is_empty() {
         Basis::CodeLimit
     } else {
         Basis::Reference
     };
-    out.push(
-        b.basis(basis)
-            .check(Check::numeric(
-                "clear span",
-                Value::Length(span),
-                Value::Length(allowable),
-                Bound::AtMost,
-                ctx.units,
-            ))
-            .finish(Detail::JoistSpan(SpanDetail::Checked(Box::new(detail)))),
-    );
+    let mut b = b.basis(basis).check(Check::numeric(
+        "clear span",
+        Value::Length(span),
+        Value::Length(allowable),
+        Bound::AtMost,
+        ctx.units,
+    ));
+    if let Some(sign) = ctx.wetting_unmeasured {
+        b = b.check(Check::skipped(
+            "moisture content",
+            "19 % (dry service)",
+            format!("{sign} was recorded in this area and no moisture reading was taken on these joists, so wet service is not ruled out"),
+        ));
+    }
+    out.push(b.finish(Detail::JoistSpan(SpanDetail::Checked(Box::new(detail)))));
+}
+
+/// Why a porch or deck joist is outside the deck joist table.
+/// Source: IRC 2018 Table R507.6 and its footnotes: No. 2 grade of southern pine, Douglas
+/// fir-larch, hem-fir and spruce-pine-fir (and redwood and cedars, not carried here), 2x6 to
+/// 2x12 at 12, 16 or 24 in, 40 psf live and 10 psf dead, L/360, wet service, incised except
+/// southern pine.
+pub fn outside_deck_tables(ctx: &MemberContext) -> Vec<&'static str> {
+    let mut out = Vec::new();
+    let Some(lumber) = &ctx.lumber else {
+        return out;
+    };
+    let nominal = lumber.section.nominal;
+    if nominal.thickness != 2 || !(6..=12).contains(&nominal.depth) {
+        out.push("a size other than 2x6 to 2x12");
+    }
+    if lumber.grade != GradeChoice::Stamped(crate::lumber::Grade::No2) {
+        out.push("a grade other than No. 2");
+    }
+    if let Some(spacing) = ctx.framing.spacing {
+        if ![12.0, 16.0, 24.0]
+            .iter()
+            .any(|l| (spacing.in_inches() - l).abs() < 1e-9)
+        {
+            out.push("a spacing other than 12, 16 or 24 in");
+        }
+    }
+    if ctx.loads.live.0 != 40.0 || ctx.loads.dead.0 != 10.0 {
+        out.push("loads other than 40 psf live and 10 psf dead");
+    }
+    if ctx.loads.deflection_denominator != 360.0 {
+        out.push("a deflection limit other than L/360");
+    }
+    if lumber.section.rough_sawn {
+        out.push("a measured (rough-sawn) section");
+    }
+    if !ctx.incised && lumber.species != Species::SouthernPine {
+        out.push("lumber not incised");
+    }
+    out
 }
 
 fn missing_inputs(ctx: &MemberContext) -> Vec<&'static str> {
@@ -196,7 +278,7 @@ impl Wording for SpanDetail {
                 len(u, d.span),
                 len(u, d.allowable),
                 d.governing.name(),
-                if d.wet.is_some() { ", wet service" } else { "" },
+                if d.wet.is_some() || d.exterior.is_some() { ", wet service" } else { "" },
             ),
         }
     }
@@ -218,6 +300,19 @@ impl Wording for SpanDetail {
                 dim(u, d.spacing)
             ));
         }
+        if let Some(ext) = d.exterior {
+            out.push(format!(
+                "Porch or deck framing, open to the weather: wet service (CM on Fb, Fv and E){}, as the deck joist table assumes",
+                if ext.incised {
+                    " and incising for preservative treatment (Ci 0.80 on Fb and Fv, 0.95 on E)"
+                } else {
+                    ""
+                }
+            ));
+            if ext.length_limited {
+                out.push("The deck joist table limits joist spans to 18 ft (for the footings); mechanics alone would allow more".into());
+            }
+        }
         if let Some((mc, [fb, fv, e])) = d.wet {
             out.push(format!(
                 "A moisture reading of {mc:.0} %{} is over 19 %: checked in wet service (CM Fb {fb}, Fv {fv}, E {e}) as a precaution; one pin reading shows the wood is wet now, not that it stays wet, and the code's tables assume dry service",
@@ -226,7 +321,8 @@ impl Wording for SpanDetail {
         }
         if !d.outside_tables.is_empty() {
             out.push(format!(
-                "Outside the code's printed span tables ({}): R502.3 leaves such spans to engineering references, so the allowable span is an NDS computation, not a code limit",
+                "Outside the code's printed {} ({}): such spans are left to engineering references, so the allowable span is an NDS computation, not a code limit",
+                if d.exterior.is_some() { "deck joist table" } else { "span tables" },
                 d.outside_tables.join(", ")
             ));
         }

@@ -53,6 +53,7 @@ pub fn options(ctx: &MemberContext) -> Option<SpanOptions> {
         dead: ctx.loads.dead,
         deflection_denominator: ctx.loads.deflection_denominator,
         wet_service: ctx.is_wet(),
+        incised: ctx.incised,
         duration: Default::default(),
         repetitive: true,
     };

@@ -71,18 +71,28 @@ impl Store {
 
     fn areas(&self, inspection_id: &str) -> Result<Vec<Area>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT id, name, kind, loads, notes FROM areas WHERE inspection_id = ?1 ORDER BY position, id",
+            "SELECT id, name, kind, loads, notes, conditions FROM areas WHERE inspection_id = ?1 ORDER BY position, id",
         )?;
-        let rows: Vec<(String, String, String, String, String)> = stmt
+        type AreaRow = (String, String, String, String, String, String);
+        let rows: Vec<AreaRow> = stmt
             .query_map([inspection_id], |r| {
-                Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?, r.get(4)?))
+                Ok((
+                    r.get(0)?,
+                    r.get(1)?,
+                    r.get(2)?,
+                    r.get(3)?,
+                    r.get(4)?,
+                    r.get(5)?,
+                ))
             })?
             .collect::<rusqlite::Result<_>>()?;
         rows.into_iter()
-            .map(|(id, name, kind, loads, notes)| {
+            .map(|(id, name, kind, loads, notes, conditions)| {
                 Ok(Area {
                     kind: serde_json::from_value(serde_json::Value::String(kind))?,
                     loads: serde_json::from_str(&loads)?,
+                    conditions: serde_json::from_str(&conditions)?,
+                    girders: self.girders(&id)?,
                     runs: self.runs(&id)?,
                     members: self
                         .members(&id, None)?
@@ -104,15 +114,16 @@ impl Store {
 
     fn runs(&self, area_id: &str) -> Result<Vec<JoistRun>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT id, label, framing FROM runs WHERE area_id = ?1 ORDER BY position, id",
+            "SELECT id, label, framing, bears_on FROM runs WHERE area_id = ?1 ORDER BY position, id",
         )?;
-        let rows: Vec<(String, String, String)> = stmt
-            .query_map([area_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?)))?
+        let rows: Vec<(String, String, String, String)> = stmt
+            .query_map([area_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?)))?
             .collect::<rusqlite::Result<_>>()?;
         rows.into_iter()
-            .map(|(id, label, framing)| {
+            .map(|(id, label, framing, bears_on)| {
                 Ok(JoistRun {
                     framing: serde_json::from_str(&framing)?,
+                    bears_on: serde_json::from_str(&bears_on)?,
                     observations: self.observations("run_id", &id)?,
                     joists: self
                         .members(area_id, Some(&id))?
@@ -128,6 +139,34 @@ impl Store {
                     label,
                 })
             })
+            .collect()
+    }
+
+    fn girders(&self, area_id: &str) -> Result<Vec<GirderLine>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, label, data FROM girders WHERE area_id = ?1 ORDER BY position, id",
+        )?;
+        let rows: Vec<(String, String, String)> = stmt
+            .query_map([area_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?)))?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, label, data)| {
+                let mut girder: GirderLine = with_identity(&data, &id, &label)?;
+                girder.posts = self.posts(&id)?;
+                Ok(girder)
+            })
+            .collect()
+    }
+
+    fn posts(&self, girder_id: &str) -> Result<Vec<Post>> {
+        let mut stmt = self.conn.prepare_cached(
+            "SELECT id, label, data FROM posts WHERE girder_id = ?1 ORDER BY position, id",
+        )?;
+        let rows: Vec<(String, String, String)> = stmt
+            .query_map([girder_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?)))?
+            .collect::<rusqlite::Result<_>>()?;
+        rows.into_iter()
+            .map(|(id, label, data)| with_identity(&data, &id, &label))
             .collect()
     }
 
@@ -180,4 +219,14 @@ impl Store {
         })?;
         Ok(rows.collect::<rusqlite::Result<_>>()?)
     }
+}
+
+/// A row's JSON `data` with its id and label columns put back.
+fn with_identity<T: serde::de::DeserializeOwned>(data: &str, id: &str, label: &str) -> Result<T> {
+    let mut value: serde_json::Value = serde_json::from_str(data)?;
+    if let Some(map) = value.as_object_mut() {
+        map.insert("id".into(), id.into());
+        map.insert("label".into(), label.into());
+    }
+    Ok(serde_json::from_value(value)?)
 }

@@ -3,7 +3,7 @@
 
 use super::migrate::search_key;
 use super::Result;
-use crate::model::{Area, Framing, Inspection, JoistRun, Observation, PhotoRef};
+use crate::model::{Area, Framing, GirderLine, Inspection, JoistRun, Observation, PhotoRef, Post};
 use rusqlite::{params, Transaction};
 
 /// Where an observation hangs: a run's typical joist, or a member (joist or single member).
@@ -88,7 +88,7 @@ pub fn insert_area(
     area: &Area,
 ) -> Result<()> {
     tx.execute(
-        "INSERT INTO areas (id, inspection_id, position, name, kind, loads, notes) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
+        "INSERT INTO areas (id, inspection_id, position, name, kind, loads, notes, conditions) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)",
         params![
             area.id,
             inspection_id,
@@ -96,9 +96,13 @@ pub fn insert_area(
             area.name,
             text_of(&area.kind)?,
             serde_json::to_string(&area.loads)?,
-            area.notes
+            area.notes,
+            serde_json::to_string(&area.conditions)?
         ],
     )?;
+    for (n, girder) in area.girders.iter().enumerate() {
+        insert_girder(tx, &area.id, n as i64, girder)?;
+    }
     for (n, run) in area.runs.iter().enumerate() {
         insert_run(tx, &area.id, n as i64, run)?;
     }
@@ -119,13 +123,14 @@ pub fn insert_area(
 
 pub fn insert_run(tx: &Transaction, area_id: &str, position: i64, run: &JoistRun) -> Result<()> {
     tx.execute(
-        "INSERT INTO runs (id, area_id, position, label, framing) VALUES (?1, ?2, ?3, ?4, ?5)",
+        "INSERT INTO runs (id, area_id, position, label, framing, bears_on) VALUES (?1, ?2, ?3, ?4, ?5, ?6)",
         params![
             run.id,
             area_id,
             position,
             run.label,
-            serde_json::to_string(&run.framing)?
+            serde_json::to_string(&run.framing)?,
+            serde_json::to_string(&run.bears_on)?
         ],
     )?;
     for (n, o) in run.observations.iter().enumerate() {
@@ -143,6 +148,59 @@ pub fn insert_run(tx: &Transaction, area_id: &str, position: i64, run: &JoistRun
             &joist.observations,
         )?;
     }
+    Ok(())
+}
+
+/// The girder's own fields as stored in its `data` column: everything but its id, label and
+/// posts, which have columns and rows of their own.
+pub fn girder_data(girder: &GirderLine) -> Result<String> {
+    let mut value = serde_json::to_value(girder)?;
+    if let Some(map) = value.as_object_mut() {
+        for key in ["id", "label", "posts"] {
+            map.remove(key);
+        }
+    }
+    Ok(value.to_string())
+}
+
+/// A post's own fields as stored in its `data` column.
+pub fn post_data(post: &Post) -> Result<String> {
+    let mut value = serde_json::to_value(post)?;
+    if let Some(map) = value.as_object_mut() {
+        for key in ["id", "label"] {
+            map.remove(key);
+        }
+    }
+    Ok(value.to_string())
+}
+
+pub fn insert_girder(
+    tx: &Transaction,
+    area_id: &str,
+    position: i64,
+    girder: &GirderLine,
+) -> Result<()> {
+    tx.execute(
+        "INSERT INTO girders (id, area_id, position, label, data) VALUES (?1, ?2, ?3, ?4, ?5)",
+        params![
+            girder.id,
+            area_id,
+            position,
+            girder.label,
+            girder_data(girder)?
+        ],
+    )?;
+    for (n, post) in girder.posts.iter().enumerate() {
+        insert_post(tx, &girder.id, n as i64, post)?;
+    }
+    Ok(())
+}
+
+pub fn insert_post(tx: &Transaction, girder_id: &str, position: i64, post: &Post) -> Result<()> {
+    tx.execute(
+        "INSERT INTO posts (id, girder_id, position, label, data) VALUES (?1, ?2, ?3, ?4, ?5)",
+        params![post.id, girder_id, position, post.label, post_data(post)?],
+    )?;
     Ok(())
 }
 

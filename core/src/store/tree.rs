@@ -1,19 +1,24 @@
-//! Edits inside an inspection: the header; areas, runs, joists, single members and
-//! observations added, changed, removed and moved. Each call is one transaction.
+//! Edits inside an inspection: the header; areas, runs, joists, single members,
+//! observations, girder lines and posts added, changed, removed and moved. Each call is one
+//! transaction.
 
 use super::clock::now_utc;
 use super::inspections::found;
 use super::save::{self, Owner};
 use super::{Result, Store, StoreError};
-use crate::model::{Area, Framing, Inspection, Joist, JoistRun, Member, Observation};
+use crate::model::{
+    Area, Framing, GirderLine, Inspection, Joist, JoistRun, Member, Observation, Post,
+};
 use rusqlite::{params, OptionalExtension, Transaction};
 
 /// The tables that hold ordered children, and the column naming their parent.
-const ORDERED: [(&str, &str); 5] = [
+const ORDERED: [(&str, &str); 7] = [
     ("areas", "inspection_id"),
     ("runs", "area_id"),
     ("members", "area_id, run_id"),
     ("observations", "run_id, member_id"),
+    ("girders", "area_id"),
+    ("posts", "girder_id"),
     ("photos", "inspection_id, attached_to"),
 ];
 
@@ -43,13 +48,14 @@ impl Store {
         let inspection_id = self.inspection_of(&area.id)?;
         self.edit(&inspection_id, |tx| {
             let changed = tx.execute(
-                "UPDATE areas SET name = ?2, kind = ?3, loads = ?4, notes = ?5 WHERE id = ?1",
+                "UPDATE areas SET name = ?2, kind = ?3, loads = ?4, notes = ?5, conditions = ?6 WHERE id = ?1",
                 params![
                     area.id,
                     area.name,
                     save::text_of(&area.kind)?,
                     serde_json::to_string(&area.loads)?,
-                    area.notes
+                    area.notes,
+                    serde_json::to_string(&area.conditions)?
                 ],
             )?;
             found(changed, &area.id)
@@ -74,6 +80,60 @@ impl Store {
                 params![run_id, label, serde_json::to_string(framing)?],
             )?;
             found(changed, run_id)
+        })
+    }
+
+    /// Sets the girder lines a run's joists bear on.
+    pub fn set_bears_on(&mut self, run_id: &str, girder_ids: &[String]) -> Result<()> {
+        let inspection_id = self.inspection_of(run_id)?;
+        self.edit(&inspection_id, |tx| {
+            let changed = tx.execute(
+                "UPDATE runs SET bears_on = ?2 WHERE id = ?1",
+                params![run_id, serde_json::to_string(girder_ids)?],
+            )?;
+            found(changed, run_id)
+        })
+    }
+
+    /// Adds a girder line (with its posts) at the end of an area.
+    pub fn add_girder(&mut self, area_id: &str, girder: &GirderLine) -> Result<()> {
+        let inspection_id = self.inspection_of(area_id)?;
+        self.edit(&inspection_id, |tx| {
+            let position = next_position(tx, "girders", "area_id = ?1", area_id)?;
+            save::insert_girder(tx, area_id, position, girder)
+        })
+    }
+
+    /// Changes a girder line's label and fields; its posts are left as they are.
+    pub fn update_girder(&mut self, girder: &GirderLine) -> Result<()> {
+        let inspection_id = self.inspection_of(&girder.id)?;
+        self.edit(&inspection_id, |tx| {
+            let changed = tx.execute(
+                "UPDATE girders SET label = ?2, data = ?3 WHERE id = ?1",
+                params![girder.id, girder.label, save::girder_data(girder)?],
+            )?;
+            found(changed, &girder.id)
+        })
+    }
+
+    /// Adds a post to a girder line.
+    pub fn add_post(&mut self, girder_id: &str, post: &Post) -> Result<()> {
+        let inspection_id = self.inspection_of(girder_id)?;
+        self.edit(&inspection_id, |tx| {
+            let position = next_position(tx, "posts", "girder_id = ?1", girder_id)?;
+            save::insert_post(tx, girder_id, position, post)
+        })
+    }
+
+    /// Changes a post's label and fields.
+    pub fn update_post(&mut self, post: &Post) -> Result<()> {
+        let inspection_id = self.inspection_of(&post.id)?;
+        self.edit(&inspection_id, |tx| {
+            let changed = tx.execute(
+                "UPDATE posts SET label = ?2, data = ?3 WHERE id = ?1",
+                params![post.id, post.label, save::post_data(post)?],
+            )?;
+            found(changed, &post.id)
         })
     }
 
@@ -282,6 +342,9 @@ impl Store {
                 JOIN members m ON m.id = o.member_id JOIN areas a ON a.id = m.area_id WHERE o.id = ?1
             UNION ALL SELECT a.inspection_id FROM observations o
                 JOIN runs r ON r.id = o.run_id JOIN areas a ON a.id = r.area_id WHERE o.id = ?1
+            UNION ALL SELECT a.inspection_id FROM girders g JOIN areas a ON a.id = g.area_id WHERE g.id = ?1
+            UNION ALL SELECT a.inspection_id FROM posts p
+                JOIN girders g ON g.id = p.girder_id JOIN areas a ON a.id = g.area_id WHERE p.id = ?1
             UNION ALL SELECT inspection_id FROM photos WHERE id = ?1
             UNION ALL SELECT id FROM inspections WHERE id = ?1
             LIMIT 1";
@@ -304,6 +367,8 @@ fn owned_ids(tx: &Transaction, id: &str) -> Result<Vec<String>> {
             UNION SELECT r.id FROM runs r JOIN below b ON r.area_id = b.id
             UNION SELECT m.id FROM members m JOIN below b ON m.area_id = b.id OR m.run_id = b.id
             UNION SELECT o.id FROM observations o JOIN below b ON o.run_id = b.id OR o.member_id = b.id
+            UNION SELECT g.id FROM girders g JOIN below b ON g.area_id = b.id
+            UNION SELECT p.id FROM posts p JOIN below b ON p.girder_id = b.id
         ) SELECT id FROM below";
     let ids = tx
         .prepare(sql)?

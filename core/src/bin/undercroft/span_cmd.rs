@@ -76,6 +76,7 @@ pub fn run(args: &SpanArgs) -> anyhow::Result<()> {
         dead: Psf(args.dead),
         deflection_denominator: args.deflection,
         wet_service: args.wet,
+        incised: false,
         duration: LoadDuration::TenYears,
         repetitive: true,
     };
