@@ -101,5 +101,9 @@ pub fn evaluate(inspection: &Inspection) -> Evaluation {
             (rule.check)(ctx, &mut findings);
         }
     }
+    let (path_findings, path_problems) = crate::load_path::evaluate(inspection);
+    findings.extend(path_findings);
+    let mut problems = problems;
+    problems.extend(path_problems);
     Evaluation { findings, problems }
 }

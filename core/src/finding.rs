@@ -20,6 +20,8 @@ pub const NEAR_LIMIT_RATIO: f64 = 0.9;
 const RATIO_TOLERANCE: f64 = 1e-9;
 /// Source: NIST SP 811 Appendix B (1 lbf = 4.448 222 N).
 const NEWTONS_PER_POUND: f64 = 4.448_222;
+/// Source: NIST SP 811 Appendix B (1 psi = 6.894 757 kPa).
+const PSI_TO_MPA: f64 = 0.006_894_757;
 /// Lengths shorter than this are shown in inches only (`14"`), longer ones in feet-inches.
 const SHORT_LENGTH_INCHES: f64 = 24.0;
 
@@ -119,6 +121,12 @@ pub enum Value {
     Length(Length),
     /// A force in pounds (shown in kN in metric).
     Pounds(f64),
+    /// A stress in psi (shown in MPa in metric).
+    Psi(f64),
+    /// An area in square inches (shown in square feet, or m² in metric).
+    SquareInches(f64),
+    /// A plain number (a slenderness ratio).
+    Number(f64),
     Percent(f64),
     Count(u32),
     Text(Text),
@@ -132,6 +140,15 @@ impl Value {
                 UnitSystem::Imperial => format!("{lb:.0} lb"),
                 UnitSystem::Metric => format!("{:.2} kN", lb * NEWTONS_PER_POUND / 1000.0),
             },
+            Value::Psi(psi) => match units {
+                UnitSystem::Imperial => format!("{psi:.0} psi"),
+                UnitSystem::Metric => format!("{:.2} MPa", psi * PSI_TO_MPA),
+            },
+            Value::SquareInches(a) => match units {
+                UnitSystem::Imperial => format!("{:.2} sq ft", a / 144.0),
+                UnitSystem::Metric => format!("{:.3} m²", a * 0.000_645_16),
+            },
+            Value::Number(n) => format!("{n:.1}"),
             Value::Percent(p) => format!("{p:.1} %"),
             Value::Count(n) => n.to_string(),
             Value::Text(t) => t.to_string(),
@@ -142,6 +159,9 @@ impl Value {
         match self {
             Value::Length(l) => Some(l.in_inches()),
             Value::Pounds(lb) => Some(*lb),
+            Value::Psi(psi) => Some(*psi),
+            Value::SquareInches(a) => Some(*a),
+            Value::Number(n) => Some(*n),
             Value::Percent(p) => Some(*p),
             Value::Count(n) => Some(*n as f64),
             Value::Text(_) => None,
@@ -152,6 +172,9 @@ impl Value {
         match self {
             Value::Length(_) => Some("in"),
             Value::Pounds(_) => Some("lb"),
+            Value::Psi(_) => Some("psi"),
+            Value::SquareInches(_) => Some("sq in"),
+            Value::Number(_) => Some("ratio"),
             Value::Percent(_) => Some("%"),
             Value::Count(_) => Some("count"),
             Value::Text(_) => None,
@@ -437,7 +460,13 @@ impl Finding {
     pub fn summary(&self) -> String {
         match (&self.detail, &self.not_checked_because) {
             (Detail::Missing(_), Some(why)) => format!("Not checked: {why}"),
-            (d, _) => d.wording().summary(self.units),
+            (d, why) => {
+                let text = d.wording().summary(self.units);
+                match why {
+                    Some(why) if text.is_empty() => format!("Not checked: {why}"),
+                    _ => text,
+                }
+            }
         }
     }
     pub fn assumptions(&self) -> Vec<String> {
@@ -502,6 +531,14 @@ impl Serialize for Finding {
     }
 }
 
+/// What every finding of one inspection shares: units, code edition, year built.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Common {
+    pub units: UnitSystem,
+    pub edition: Arc<str>,
+    pub year_built: Option<u16>,
+}
+
 /// Builds a finding; rules call this and nothing else to make findings.
 pub struct FindingBuilder {
     finding: Finding,
@@ -527,6 +564,27 @@ impl FindingBuilder {
                 units: ctx.units,
                 edition: ctx.edition.clone(),
                 year_built: ctx.year_built,
+            },
+        }
+    }
+
+    /// A finding about something that is not a joist or member (a girder line, a post, an
+    /// area's conditions), placed by the caller.
+    pub fn at(rule: &'static RuleInfo, place: Place, common: &Common) -> Self {
+        FindingBuilder {
+            finding: Finding {
+                rule,
+                basis: rule.basis,
+                status: Status::NotChecked,
+                place,
+                observation_id: None,
+                checks: Vec::new(),
+                governing: None,
+                not_checked_because: None,
+                detail: Detail::Missing("Enter the missing measurements."),
+                units: common.units,
+                edition: common.edition.clone(),
+                year_built: common.year_built,
             },
         }
     }

@@ -85,7 +85,10 @@ fn check_ids(inspection: &Inspection) -> Result<()> {
         return Err(InterchangeError::EmptyId("the inspection".into()));
     }
     let mut seen = HashSet::new();
-    for id in crate::model::renumber::ids_of(inspection).into_iter().skip(1) {
+    for id in crate::model::renumber::ids_of(inspection)
+        .into_iter()
+        .skip(1)
+    {
         if id.trim().is_empty() {
             return Err(InterchangeError::EmptyId(
                 "an area, run, joist, member, girder, post, observation or photo".into(),

@@ -7,6 +7,7 @@ pub mod forms;
 pub mod generate;
 pub mod geometry;
 pub mod interchange;
+pub mod load_path;
 pub mod lumber;
 pub mod mechanics;
 pub mod model;

@@ -124,6 +124,8 @@ pub struct MemberContext<'a> {
     pub year_built: Option<u16>,
     /// Porch or deck framing, open to the weather: wet service whatever the meter says.
     pub exterior: bool,
+    /// What kind of space the member is over (exposed ground in a crawlspace).
+    pub area_kind: AreaKind,
     /// Exterior framing of a species incised for treatment (all but southern pine), as
     /// the deck tables assume.
     pub incised: bool,
@@ -449,6 +451,7 @@ impl<'a> Shared<'a> {
             moisture_from_run,
             year_built: self.inspection.property.year_built,
             exterior,
+            area_kind: self.kind,
             incised,
             wetting_unmeasured,
         }

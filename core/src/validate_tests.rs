@@ -140,6 +140,7 @@ fn run_with_joist(
             framing: Default::default(),
             observations: joist_obs,
         }],
+        bears_on: vec![],
     });
     i
 }

@@ -36,6 +36,7 @@ pub fn AreaView(id: String) -> Element {
                 },
                 observations: vec![],
                 joists: vec![],
+                bears_on: vec![],
             };
             match app.change(|s| s.add_run(&area_id, &run)) {
                 Ok(()) => {

@@ -45,6 +45,8 @@ pub fn InspectionView(id: String) -> Element {
                 loads: Default::default(),
                 runs: vec![],
                 members: vec![],
+                girders: vec![],
+                conditions: Default::default(),
                 notes: String::new(),
             };
             if area.name.trim().is_empty() {

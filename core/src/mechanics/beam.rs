@@ -187,10 +187,7 @@ fn max_moment(span: f64, w: f64, left: f64, points: &[(f64, f64)]) -> f64 {
             start = a;
         }
     }
-    candidates
-        .into_iter()
-        .map(moment_at)
-        .fold(0.0, f64::max)
+    candidates.into_iter().map(moment_at).fold(0.0, f64::max)
 }
 
 #[cfg(test)]
@@ -273,7 +270,11 @@ mod tests {
         assert!((c.reactions_lb.0 - 1100.0).abs() < 1e-9);
         assert!((c.reactions_lb.1 - 900.0).abs() < 1e-9);
         let s = 2.0 * 1.5 * 9.25 * 9.25 / 6.0;
-        assert!((c.bending.0 * s - 43_200.0).abs() < 0.5, "{}", c.bending.0 * s);
+        assert!(
+            (c.bending.0 * s - 43_200.0).abs() < 0.5,
+            "{}",
+            c.bending.0 * s
+        );
         // A point load near the end: the moment peaks between it and midspan.
         input.points = vec![(6.0, 100.0)];
         let c = check_beam(&input).unwrap();

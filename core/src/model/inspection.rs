@@ -97,9 +97,9 @@ impl Inspection {
     /// A post, its girder line and its area.
     pub fn post(&self, id: &str) -> Option<(&Area, &GirderLine, &Post)> {
         self.areas.iter().find_map(|a| {
-            a.girders.iter().find_map(|g| {
-                g.posts.iter().find(|p| p.id == id).map(|p| (a, g, p))
-            })
+            a.girders
+                .iter()
+                .find_map(|g| g.posts.iter().find(|p| p.id == id).map(|p| (a, g, p)))
         })
     }
 

@@ -30,6 +30,10 @@ impl GirderKind {
             GirderKind::Steel => "steel girder",
         }
     }
+
+    pub fn is_engineered_or_steel(self) -> bool {
+        matches!(self, GirderKind::Engineered | GirderKind::Steel)
+    }
 }
 
 /// How the plies of a built-up girder are held together.

@@ -24,5 +24,7 @@ pub use load_path::{
     Footing, GirderKind, GirderLine, PlyFastening, PointLoad, Post, PostBase, PostCondition,
     PostHold, PostMaterial, SoilClass,
 };
+pub use observation::{
+    CantileverLoad, DamageCause, Edge, End, Observation, ObservationKind, SagReading,
+};
 pub use site::{SiteConditions, VaporRetarder, Ventilation};
-pub use observation::{CantileverLoad, DamageCause, Edge, End, Observation, ObservationKind, SagReading};

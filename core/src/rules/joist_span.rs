@@ -25,7 +25,9 @@ pub const DECK_RULE: RuleInfo = RuleInfo {
     id: "deck-joist-span",
     title: "Porch or deck joist span",
     code_section: Some("R507.6, Table R507.6"),
-    other_source: Some("NDS 2018 3.3, 3.4, 3.5; Supplement Table 4A (wet service); Table 4.3.8 (incising)"),
+    other_source: Some(
+        "NDS 2018 3.3, 3.4, 3.5; Supplement Table 4A (wet service); Table 4.3.8 (incising)",
+    ),
     basis: Basis::CodeLimit,
 };
 
@@ -278,7 +280,11 @@ impl Wording for SpanDetail {
                 len(u, d.span),
                 len(u, d.allowable),
                 d.governing.name(),
-                if d.wet.is_some() || d.exterior.is_some() { ", wet service" } else { "" },
+                if d.wet.is_some() || d.exterior.is_some() {
+                    ", wet service"
+                } else {
+                    ""
+                },
             ),
         }
     }

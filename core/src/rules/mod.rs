@@ -4,16 +4,20 @@
 mod bearing;
 mod bored_hole;
 mod bridging;
+mod cantilever;
 mod end_restraint;
 mod engineered;
+mod ground_clearance;
 mod joist_span;
 mod lap;
 mod moisture;
 mod notch;
 mod notched_end;
+mod opening;
+mod partition;
 mod sag;
 pub use sag::sag_of;
-mod shared;
+pub(crate) mod shared;
 mod span_options;
 mod wood_damage;
 
@@ -43,6 +47,12 @@ pub enum Detail {
     Damage(wood_damage::DamageDetail),
     Cut(wood_damage::CutDetail),
     EndShear(notched_end::EndShearDetail),
+    /// A finding of the load path (girders, posts, footings, the space's conditions).
+    Path(Box<crate::load_path::PathDetail>),
+    Opening(opening::OpeningDetail),
+    Partition(partition::PartitionDetail),
+    Cantilever(cantilever::CantileverDetail),
+    JoistClearance(ground_clearance::JoistClearanceDetail),
 }
 
 impl Detail {
@@ -63,6 +73,11 @@ impl Detail {
             Detail::Damage(d) => d,
             Detail::Cut(d) => d,
             Detail::EndShear(d) => d,
+            Detail::Path(d) => d.as_ref(),
+            Detail::Opening(d) => d,
+            Detail::Partition(d) => d,
+            Detail::Cantilever(d) => d,
+            Detail::JoistClearance(d) => d,
         }
     }
 }
@@ -128,6 +143,22 @@ pub static RULES: &[Rule] = &[
         check: bored_hole::check,
     },
     Rule {
+        info: &opening::RULE,
+        check: opening::check,
+    },
+    Rule {
+        info: &partition::RULE,
+        check: partition::check,
+    },
+    Rule {
+        info: &cantilever::RULE,
+        check: cantilever::check,
+    },
+    Rule {
+        info: &ground_clearance::RULE,
+        check: ground_clearance::check,
+    },
+    Rule {
         info: &engineered::CUT_RULE,
         check: engineered::check_cuts,
     },
@@ -153,6 +184,17 @@ pub static RULES: &[Rule] = &[
     },
 ];
 
+/// Rule identities reported by a check listed under another rule (porch and deck joist
+/// spans, by the joist span check) and by the load path: with `RULES`, every id a finding
+/// can carry.
+pub fn all_rule_infos() -> impl Iterator<Item = &'static RuleInfo> {
+    RULES
+        .iter()
+        .map(|r| r.info)
+        .chain(std::iter::once(&joist_span::DECK_RULE))
+        .chain(crate::load_path::rule_infos())
+}
+
 /// Looks a rule up by id.
 pub fn rule(id: &str) -> Option<&'static Rule> {
     RULES.iter().find(|r| r.info.id == id)
@@ -166,36 +208,34 @@ mod tests {
     #[test]
     fn ids_are_unique_kebab_case() {
         let mut seen = HashSet::new();
-        for r in RULES {
-            assert!(seen.insert(r.info.id), "duplicate id {}", r.info.id);
+        for info in all_rule_infos() {
+            assert!(seen.insert(info.id), "duplicate id {}", info.id);
             assert!(
-                r.info
-                    .id
+                info.id
                     .chars()
                     .all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '-')
-                    && !r.info.id.starts_with('-')
-                    && !r.info.id.ends_with('-'),
+                    && !info.id.starts_with('-')
+                    && !info.id.ends_with('-'),
                 "{} is not kebab-case",
-                r.info.id
+                info.id
             );
             assert!(
-                r.info.code_section.is_some() || r.info.other_source.is_some(),
+                info.code_section.is_some() || info.other_source.is_some(),
                 "{} cites nothing",
-                r.info.id
+                info.id
             );
         }
     }
 
     #[test]
     fn rule_list_snapshot() {
-        let list: Vec<String> = RULES
-            .iter()
-            .map(|r| {
+        let list: Vec<String> = all_rule_infos()
+            .map(|info| {
                 format!(
                     "{:<26} {:<44} {}",
-                    r.info.id,
-                    r.info.title,
-                    r.info.citation("IRC 2018")
+                    info.id,
+                    info.title,
+                    info.citation("IRC 2018")
                 )
             })
             .collect();

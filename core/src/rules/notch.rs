@@ -109,16 +109,28 @@ fn one(ctx: &MemberContext, id: &Arc<str>, kind: &ObservationKind) -> Finding {
             ))
             .check(middle_third_check(ctx, kind, d));
         if section.nominal.thickness >= TENSION_SIDE_MIN_THICKNESS {
-            let edge_text = if *edge == Edge::Top {
-                "top edge"
-            } else {
-                "bottom edge, away from the end"
+            // R502.3.3: over a cantilever's support and along the overhang the top edge is
+            // the tension side, so a cantilevered member has none it may notch.
+            let cantilevered = ctx
+                .observations
+                .iter()
+                .any(|o| matches!(o.kind, ObservationKind::Cantilever { .. }));
+            let edge_text = match (*edge, cantilevered) {
+                (Edge::Top, false) => "top edge",
+                (Edge::Top, true) => {
+                    "top edge of a cantilevered member, in tension over its support"
+                }
+                (Edge::Bottom, _) => "bottom edge, away from the end",
             };
             b = b.check(Check::qualitative(
                 "tension side",
                 edge_text,
-                "no notch in the tension (bottom) edge except at the ends",
-                *edge == Edge::Top,
+                if cantilevered {
+                    "no notch in a tension edge except at the ends (both edges of a cantilevered member)"
+                } else {
+                    "no notch in the tension (bottom) edge except at the ends"
+                },
+                *edge == Edge::Top && !cantilevered,
             ));
         }
     }

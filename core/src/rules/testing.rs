@@ -62,6 +62,8 @@ pub fn inspection(
                 framing,
                 observations,
             }],
+            girders: vec![],
+            conditions: Default::default(),
             notes: String::new(),
         }],
         photos: vec![],

@@ -117,7 +117,9 @@ impl Store {
             "SELECT id, label, framing, bears_on FROM runs WHERE area_id = ?1 ORDER BY position, id",
         )?;
         let rows: Vec<(String, String, String, String)> = stmt
-            .query_map([area_id], |r| Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?)))?
+            .query_map([area_id], |r| {
+                Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?))
+            })?
             .collect::<rusqlite::Result<_>>()?;
         rows.into_iter()
             .map(|(id, label, framing, bears_on)| {

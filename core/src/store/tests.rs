@@ -171,6 +171,8 @@ fn edits_inside_an_inspection() {
         loads: Default::default(),
         runs: vec![],
         members: vec![],
+        girders: vec![],
+        conditions: Default::default(),
         notes: String::new(),
     };
     store.add_area(&id, &area).unwrap();
@@ -180,6 +182,7 @@ fn edits_inside_an_inspection() {
         framing: Framing::default(),
         observations: vec![],
         joists: vec![],
+        bears_on: vec![],
     };
     store.add_run(&area.id, &run).unwrap();
     let framing = Framing {
@@ -660,4 +663,85 @@ fn notes_and_reports() {
     assert_eq!(r.sha256.len(), 64);
     assert_eq!(store.reports(&demo.id).unwrap(), [r]);
     assert_eq!(store.integrity_check().unwrap(), "ok");
+}
+
+#[test]
+fn girder_lines_and_posts_are_edited_in_place() {
+    use crate::model::{GirderLine, Post, PostCondition, SiteConditions, SoilClass};
+    use crate::units::Length;
+    let t = Temp::new("girders");
+    let mut store = Store::open(&t.db()).unwrap();
+    let demo =
+        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
+            .unwrap();
+    store.import_inspection(&demo).unwrap();
+    let area = demo.areas[0].id.clone();
+    let mut line = GirderLine::new(new_id(), "Girder B");
+    line.plies = Some(3);
+    line.length = Some(Length::inches(240.0));
+    store.add_girder(&area, &line).unwrap();
+    let first = Post::new(new_id(), "Post 1", Length::inches(120.0));
+    let mut second = Post::new(new_id(), "Post 2", Length::inches(60.0));
+    store.add_post(&line.id, &first).unwrap();
+    store.add_post(&line.id, &second).unwrap();
+    second.conditions = vec![PostCondition::Shimmed];
+    second.label = "Post 2, shimmed".into();
+    store.update_post(&second).unwrap();
+    store.move_to(&second.id, 0).unwrap();
+    line.label = "Girder B (3-ply)".into();
+    store.update_girder(&line).unwrap();
+    let run = demo.areas[0].runs[0].id.clone();
+    store
+        .set_bears_on(&run, std::slice::from_ref(&line.id))
+        .unwrap();
+    let mut changed_area = demo.areas[0].clone();
+    changed_area.conditions = SiteConditions {
+        standing_water: Some(true),
+        soil: Some(SoilClass::Sand),
+        ..Default::default()
+    };
+    store.update_area(&changed_area).unwrap();
+
+    let loaded = store.load_inspection(&demo.id).unwrap();
+    let a = loaded.area(&area).unwrap();
+    let g = a.girders.iter().find(|g| g.id == line.id).unwrap();
+    assert_eq!(g.label, "Girder B (3-ply)");
+    assert_eq!(g.plies, Some(3));
+    let labels: Vec<&str> = g.posts.iter().map(|p| p.label.as_str()).collect();
+    assert_eq!(labels, ["Post 2, shimmed", "Post 1"]);
+    assert_eq!(g.posts[0].conditions, [PostCondition::Shimmed]);
+    assert_eq!(a.runs[0].bears_on, [line.id.clone()]);
+    assert_eq!(a.conditions.soil, Some(SoilClass::Sand));
+    // The whole inspection survives a round trip through the store.
+    assert_eq!(
+        crate::interchange::to_json(&store.export_inspection(&demo.id).unwrap()),
+        crate::interchange::to_json(&loaded)
+    );
+
+    // A post removed takes its photos; the girder removed takes its posts.
+    store.remove(&first.id).unwrap();
+    assert_eq!(
+        store
+            .load_inspection(&demo.id)
+            .unwrap()
+            .area(&area)
+            .unwrap()
+            .girders
+            .iter()
+            .find(|g| g.id == line.id)
+            .unwrap()
+            .posts
+            .len(),
+        1
+    );
+    store.remove(&line.id).unwrap();
+    let n: i64 = store
+        .conn
+        .query_row(
+            "SELECT COUNT(*) FROM posts WHERE girder_id = ?1",
+            [&line.id],
+            |r| r.get(0),
+        )
+        .unwrap();
+    assert_eq!(n, 0);
 }

@@ -1,14 +1,14 @@
 //! `undercroft rules`: lists every rule with its id, title and citation.
 
-use undercroft_core::rules::RULES;
+use undercroft_core::rules::all_rule_infos;
 
 pub fn run() -> anyhow::Result<()> {
-    for rule in RULES {
+    for info in all_rule_infos() {
         println!(
-            "{:<18} {:<52} {}",
-            rule.info.id,
-            rule.info.title,
-            rule.info.citation("IRC 2018")
+            "{:<24} {:<46} {}",
+            info.id,
+            info.title,
+            info.citation("IRC 2018")
         );
     }
     Ok(())
