@@ -61,10 +61,11 @@ fn inspection_shows_areas_with_counts_over() {
         "{html}"
     );
     assert!(html.contains("Basement under the bedrooms"));
-    // Code limits and engineering references over (16), and the demo's decay and cut joist
-    // as observed conditions to evaluate (2).
+    // Code limits and engineering references over (25, with the load path and the porch),
+    // and the demo's decay, cut joist, shimmed post and torn ground cover as observed
+    // conditions to evaluate (4).
     assert!(
-        html.contains("16 over a limit, 2 to be evaluated"),
+        html.contains("25 over a limit, 4 to be evaluated"),
         "{html}"
     );
     assert!(html.contains("over a limit or to be evaluated"));

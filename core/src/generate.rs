@@ -103,6 +103,79 @@ pub fn inspection_with_members(members: usize) -> Inspection {
     }
 }
 
+/// The same inspection with `lines` girder lines of `posts_per_line` posts each, spread over
+/// its areas; every run bears on one of its area's girders, and the posts vary in size,
+/// height, base and footing.
+pub fn inspection_with_load_path(
+    members: usize,
+    lines: usize,
+    posts_per_line: usize,
+) -> Inspection {
+    let mut inspection = inspection_with_members(members);
+    let areas = inspection.areas.len().max(1);
+    for n in 0..lines {
+        let area = &mut inspection.areas[n % areas];
+        let id = format!("g{n}");
+        let mut line = GirderLine::new(id.clone(), format!("Girder {}", n + 1));
+        line.species = Some(Species::ALL[n % 4]);
+        line.grade = Some(GradeChoice::Stamped(Grade::No2));
+        line.size = Some(NominalSize::new(2, [8, 10, 12][n % 3]));
+        line.plies = Some(2 + (n % 3) as u8);
+        let span = 72.0 + (n % 5) as f64 * 12.0;
+        line.length = Some(Length::inches(span * (posts_per_line + 1) as f64));
+        line.end_a = Some(Bearing {
+            length: Some(Length::inches(4.0)),
+            on: BearingSupport::Concrete,
+        });
+        line.end_b = line.end_a;
+        line.ground_clearance = Some(Length::inches(10.0 + n as f64));
+        line.splices = vec![Length::inches(span)];
+        line.posts = (0..posts_per_line)
+            .map(|k| {
+                let mut post = Post::new(
+                    format!("{id}-p{k}"),
+                    format!("Post {}", k + 1),
+                    Length::inches(span * (k + 1) as f64),
+                );
+                post.species = Some(Species::DouglasFirLarch);
+                post.grade = Some(GradeChoice::Stamped(Grade::No2));
+                post.size = Some(NominalSize::new(4, 4 + 2 * (k % 2) as u8));
+                post.height = Some(Length::inches(24.0 + (k * 12) as f64));
+                post.top = Some(PostHold::Connector);
+                post.bottom = Some(if k % 2 == 0 {
+                    PostHold::Pinned
+                } else {
+                    PostHold::NoneSeen
+                });
+                post.stands_on = Some(PostBase::ConcretePier);
+                post.base_height = Some(Length::inches(6.0 + k as f64));
+                post.footing = Footing {
+                    visible: k % 3 != 2,
+                    width: Some(Length::inches(20.0)),
+                    length: Some(Length::inches(20.0)),
+                    thickness: Some(Length::inches(8.0)),
+                };
+                if k % 4 == 1 {
+                    post.conditions = vec![PostCondition::Shimmed];
+                }
+                post
+            })
+            .collect();
+        area.girders.push(line);
+    }
+    for area in &mut inspection.areas {
+        let ids: Vec<String> = area.girders.iter().map(|g| g.id.clone()).collect();
+        if ids.is_empty() {
+            continue;
+        }
+        for (k, run) in area.runs.iter_mut().enumerate() {
+            run.bears_on = vec![ids[k % ids.len()].clone()];
+        }
+        area.conditions.vapor_retarder = Some(VaporRetarder::Partial);
+    }
+    inspection
+}
+
 fn observations(id: &str, span: f64, j: usize) -> Vec<Observation> {
     let o = |suffix: &str, kind| Observation {
         id: format!("{id}-{suffix}").into(),
@@ -156,6 +229,22 @@ fn observations(id: &str, span: f64, j: usize) -> Vec<Observation> {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn makes_the_load_path_asked_for() {
+        let i = inspection_with_load_path(500, 20, 3);
+        let lines: Vec<&GirderLine> = i.areas.iter().flat_map(|a| &a.girders).collect();
+        assert_eq!(lines.len(), 20);
+        assert_eq!(lines.iter().map(|g| g.posts.len()).sum::<usize>(), 60);
+        let e = crate::evaluate(&i);
+        assert!(e.problems.is_empty(), "{:?}", e.problems);
+        let strength = e
+            .findings
+            .iter()
+            .filter(|f| f.rule_id() == "girder-strength" && f.status != crate::Status::NotChecked)
+            .count();
+        assert_eq!(strength, 80, "four spans on each of 20 lines are computed");
+    }
 
     #[test]
     fn makes_the_members_asked_for() {

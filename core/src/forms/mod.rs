@@ -5,12 +5,17 @@
 mod framing_form;
 mod live_check;
 mod observation_form;
+mod path_form;
 mod picks;
 mod preview;
 
 pub use framing_form::{FieldError, FramingForm};
 pub use live_check::{live_check, LiveCheck};
 pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};
+pub use path_form::{
+    field_text, girder_with, post_position_problem, post_with, site_with, with_field, PathField,
+    PathFieldType, GIRDER_FIELDS, POST_FIELDS, SITE_FIELDS,
+};
 pub use picks::{
     BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS, ROOM_USES, SIZES, SPECIES,
 };

@@ -90,6 +90,9 @@ pub const KINDS: &[(&str, &str)] = &[
     ("lap", "Lap over a support"),
     ("restraint", "End restraint"),
     ("cut", "Other cut"),
+    ("opening", "Floor opening"),
+    ("partition", "Bearing partition above"),
+    ("cantilever", "Cantilever"),
 ];
 
 const NOTCH_FIELDS: &[FieldSpec] = &[
@@ -180,6 +183,64 @@ const RESTRAINT_FIELDS: &[FieldSpec] = &[
     ),
 ];
 const CUT_FIELDS: &[FieldSpec] = &[field("description", "What was cut", FieldType::Text, false)];
+const OPENING_FIELDS: &[FieldSpec] = &[
+    field(
+        "header_span",
+        "Header span across the opening",
+        FieldType::Long,
+        true,
+    ),
+    field(
+        "header_plies",
+        "Plies in the header",
+        FieldType::Count,
+        true,
+    ),
+    field(
+        "trimmer_plies",
+        "Plies in each trimmer",
+        FieldType::Count,
+        true,
+    ),
+    field("hangers", "Header hung on hangers", FieldType::Flag, false),
+    field("tail_length", "Longest tail joist", FieldType::Long, false),
+    field(
+        "tails_supported",
+        "Tails on framing anchors or ledger strips",
+        FieldType::Flag,
+        false,
+    ),
+];
+const PARTITION_FIELDS: &[FieldSpec] = &[
+    field("parallel", "Runs along the joists", FieldType::Flag, false),
+    field(
+        "doubled",
+        "Joist under it doubled (or a beam)",
+        FieldType::Flag,
+        false,
+    ),
+    field(
+        "offset",
+        "Across the joists: distance from the support below",
+        FieldType::Short,
+        false,
+    ),
+];
+const CARRIES: &[(&str, &str)] = &[
+    ("floor-only", "The floor only"),
+    ("balcony", "A balcony"),
+    ("wall-and-roof", "A wall and roof"),
+];
+const CANTILEVER_FIELDS: &[FieldSpec] = &[
+    field(
+        "length",
+        "Overhang past the support",
+        FieldType::Short,
+        true,
+    ),
+    field("backspan", "Span inside (backspan)", FieldType::Long, false),
+    field("carries", "Carries", FieldType::Choice(CARRIES), false),
+];
 
 /// The fields of one kind of observation.
 pub fn fields_of(kind: &str) -> &'static [FieldSpec] {
@@ -193,6 +254,9 @@ pub fn fields_of(kind: &str) -> &'static [FieldSpec] {
         "lap" => LAP_FIELDS,
         "restraint" => RESTRAINT_FIELDS,
         "cut" => CUT_FIELDS,
+        "opening" => OPENING_FIELDS,
+        "partition" => PARTITION_FIELDS,
+        "cantilever" => CANTILEVER_FIELDS,
         _ => &[],
     }
 }

@@ -17,6 +17,8 @@ mod site_conditions;
 
 pub use context::{girders, GirderContext, GirderLumber, LineLoad, RunShare, Support};
 pub use footing::UNKNOWN_SOIL_PSF;
+pub use girder_bearing::GirderBearingDetail;
+pub use girder_strength::{SpanCheck, StrengthDetail};
 
 use crate::finding::{Common, Finding, RuleInfo, Status, Wording};
 use crate::model::Inspection;
@@ -150,3 +152,6 @@ pub fn rule_infos() -> impl Iterator<Item = &'static RuleInfo> {
         .map(|r| r.info)
         .chain(std::iter::once(SITE_RULE))
 }
+
+#[cfg(test)]
+mod tests;

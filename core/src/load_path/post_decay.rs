@@ -78,29 +78,31 @@ fn one(g: &GirderContext, post: &Post) -> Finding {
             ),
         };
     }
-    let min = if g.area.kind == AreaKind::Crawlspace {
-        ABOVE_GROUND_IN + 1.0 / 16.0
+    let (min, what) = if g.area.kind == AreaKind::Crawlspace {
+        (
+            ABOVE_GROUND_IN,
+            "height of the pier top above exposed ground (more than 8 in)",
+        )
     } else {
-        ABOVE_FLOOR_IN
+        (
+            ABOVE_FLOOR_IN,
+            "height of the pier or pedestal top above the floor",
+        )
     };
     let b = match post.base_height {
         Some(h) if h.in_inches() >= min || post.treated == Some(false) => b.check(Check::numeric(
-            "height of the pier top above the ground or floor",
+            what,
             Value::Length(h),
             Value::Length(Length::inches(min)),
             Bound::AtLeast,
             u,
         )),
         Some(_) => b.check(Check::skipped(
-            "height of the pier top above the ground or floor",
+            what,
             "or durable or treated wood",
             "lower than the code's clearance, and whether the post is treated is not recorded",
         )),
-        None => b.check(Check::skipped(
-            "height of the pier top above the ground or floor",
-            "R317.1.4",
-            "not measured",
-        )),
+        None => b.check(Check::skipped(what, "R317.1.4", "not measured")),
     };
     b.finish(detail)
 }

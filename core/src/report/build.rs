@@ -7,6 +7,7 @@ use crate::engine::Evaluation;
 use crate::finding::{benchmark_note, Basis, Finding, Status};
 use crate::lumber::{design_values, DesignValues};
 use crate::model::{Inspection, PhotoRef};
+use crate::rules::Detail;
 use crate::store::FindingNote;
 use crate::units::{format_dimension, format_length, Length, UnitSystem};
 use crate::validate::{members, MemberContext};
@@ -30,6 +31,12 @@ pub fn build_report(input: &ReportInput) -> Report {
     let notes: HashMap<&str, &FindingNote> =
         input.notes.iter().map(|n| (n.key.as_str(), n)).collect();
     let (contexts, _) = members(i);
+    let common = crate::finding::Common {
+        units: i.units,
+        edition: std::sync::Arc::from(i.code_edition.as_str()),
+        year_built: i.property.year_built,
+    };
+    let (lines, _) = crate::load_path::girders(i, &common);
     let mut placed = HashSet::new();
     let areas = i
         .areas
@@ -39,7 +46,7 @@ pub fn build_report(input: &ReportInput) -> Report {
                 .iter()
                 .filter(|c| *c.place.area_id == area.id)
                 .collect();
-            area_section(input, area, &ctxs, &notes, &mut placed)
+            area_section(input, area, &ctxs, &lines, &notes, &mut placed)
         })
         .collect();
     Report {
@@ -247,6 +254,7 @@ fn area_section(
     input: &ReportInput,
     area: &crate::model::Area,
     ctxs: &[&MemberContext],
+    lines: &[crate::load_path::GirderContext],
     notes: &HashMap<&str, &FindingNote>,
     placed: &mut HashSet<String>,
 ) -> AreaSection {
@@ -299,10 +307,12 @@ fn area_section(
     let blocks = findings
         .iter()
         .map(|f| {
-            let owner =
-                f.observation_id.as_deref().map(str::to_string).or_else(|| {
-                    (f.rule_id() == "joist-span").then(|| f.place.member_id.to_string())
-                });
+            let owner = f.observation_id.as_deref().map(str::to_string).or_else(|| {
+                // A member's photos go with its span finding; a girder's or post's with
+                // its first (worst) finding.
+                (f.rule_id() == "joist-span" || matches!(f.detail, Detail::Path(_)))
+                    .then(|| f.place.member_id.to_string())
+            });
             let photos = owner.map(|o| photos_of(&o, placed)).unwrap_or_default();
             let seen = f
                 .observation_id
@@ -312,6 +322,12 @@ fn area_section(
         })
         .collect();
     let mut photos = photos_of(&area.id, placed);
+    for girder in &area.girders {
+        photos.extend(photos_of(&girder.id, placed));
+        for post in &girder.posts {
+            photos.extend(photos_of(&post.id, placed));
+        }
+    }
     for ctx in ctxs {
         photos.extend(photos_of(&ctx.place.member_id, placed));
         for o in &ctx.observations {
@@ -331,6 +347,11 @@ fn area_section(
         views: ctxs
             .iter()
             .filter_map(|c| side_view(c, &area.name, input.evaluation))
+            .collect(),
+        girders: lines
+            .iter()
+            .filter(|g| g.area.id == area.id)
+            .map(|g| super::girder_view::girder_view(g, &input.evaluation.findings))
             .collect(),
         photos,
     }

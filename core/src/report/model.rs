@@ -87,6 +87,8 @@ pub struct AreaSection {
     pub members: Vec<MemberRow>,
     pub findings: Vec<FindingBlock>,
     pub views: Vec<SideView>,
+    /// Each girder line with its posts, spans and loads.
+    pub girders: Vec<GirderView>,
     /// Photos of the area itself, and any not placed with a finding.
     pub photos: Vec<PhotoSlot>,
 }
@@ -148,6 +150,44 @@ pub struct SideView {
     pub sag_reference_text: String,
     /// The largest sag read, as text.
     pub sag_largest_text: String,
+}
+
+/// A scaled side view of a girder line: its ends and posts, the spans between them with
+/// their use, the load from the joists it carries, and ply joints. Geometry in inches from
+/// the face of the support at end A.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct GirderView {
+    pub title: String,
+    /// The drawn length: to end B, or a little past the last post when the length is not known.
+    pub length_in: f64,
+    pub end_b_known: bool,
+    pub supports: Vec<SupportMark>,
+    pub spans: Vec<SpanMark>,
+    /// "830 lb/ft from Kitchen joists (7.6 ft), Dining room joists (6.2 ft)".
+    pub load_text: String,
+    /// Ply joints: position and whether it is over (between supports).
+    pub splices: Vec<(f64, bool)>,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SupportMark {
+    pub x: f64,
+    pub is_post: bool,
+    pub label: String,
+    /// The load brought to it, as text.
+    pub load_text: String,
+    /// Bearing as measured, as text.
+    pub bearing_text: String,
+    /// Some finding about this support is over its limit or to be evaluated.
+    pub over: bool,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SpanMark {
+    pub x0: f64,
+    pub x1: f64,
+    pub label: String,
+    pub over: bool,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]

@@ -3,6 +3,7 @@
 
 mod draw;
 mod fonts;
+mod girder_draw;
 mod scripts;
 mod sections;
 mod writer;

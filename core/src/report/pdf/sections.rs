@@ -113,6 +113,12 @@ pub fn area(w: &mut Writer, a: &AreaSection) {
         heading(w, "Members", 11.0);
         member_table(w, &a.members);
     }
+    if !a.girders.is_empty() {
+        heading(w, "Girders and posts", 11.0);
+        for g in &a.girders {
+            super::girder_draw::girder_view(w, g);
+        }
+    }
     if !a.views.is_empty() {
         heading(w, "Side views", 11.0);
         for v in &a.views {
