@@ -1,8 +1,8 @@
 //! The app's screens and their addresses.
 
 use crate::views::{
-    AreaView, Findings, InspectionView, Inspections, MemberView, ObservationView, ReportView,
-    RunView, SettingsView,
+    AreaView, Findings, GirderScreen, InspectionView, Inspections, MemberView, ObservationView,
+    PostScreen, ReportView, RunView, SettingsView,
 };
 use dioxus::prelude::*;
 
@@ -23,6 +23,12 @@ pub enum Route {
     /// One joist of a run, or a single member: its framing, observations and photos.
     #[route("/member/:id")]
     MemberView { id: String },
+    /// One girder line: its posts along a scaled side view, the joists it carries, findings.
+    #[route("/girder/:id")]
+    GirderScreen { id: String },
+    /// One post under a girder: size, height, ends, base, footing, what was seen.
+    #[route("/post/:id")]
+    PostScreen { id: String },
     /// One observation on a run or member (new when `id` is not stored yet): its fields,
     /// the verdict with its citation, and the side view, live.
     #[route("/observe/:owner/:kind/:id")]

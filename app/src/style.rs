@@ -20,6 +20,10 @@ button.quiet { background: transparent; color: var(--ink); }
 input, select, textarea { font: inherit; width: 100%; box-sizing: border-box; min-height: 48px; padding: 8px 10px; border: 2px solid var(--line); border-radius: 8px; background: var(--paper); color: var(--ink); }
 label { display: block; margin: 10px 0 4px; font-weight: 600; }
 .field-error { color: var(--over); font-weight: 600; }
+.checks label { display: flex; align-items: center; gap: 8px; font-weight: 400; min-height: 44px; margin: 0; }
+.checks input { width: 28px; min-height: 28px; }
+figure.girder-view figcaption { font-size: 14px; color: var(--muted); }
+ul.findings-brief li { padding: 8px 0; border-bottom: 1px solid var(--line); }
 ul.list { list-style: none; padding: 0; margin: 0; }
 ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(--line); color: var(--ink); text-decoration: none; }
 .muted { color: var(--muted); font-size: 15px; }

@@ -220,3 +220,46 @@ fn an_archived_inspection_can_be_brought_back() {
     let list = render("/");
     assert!(list.contains("Show archived inspections"), "{list}");
 }
+
+#[test]
+fn girder_screen_shows_posts_spans_and_what_it_carries() {
+    let html = render("/girder/girder-centre");
+    assert!(html.contains("Centre girder"), "{html}");
+    // The side view: spans with their use, the over span named in words.
+    assert!(html.contains("10&#39; 0&#34;, 150 % over"), "{html}");
+    assert!(html.contains(" over"), "{html}");
+    assert!(html.contains("Post 1") && html.contains("Post 2"));
+    assert!(html.contains("Carries: Kitchen joists"), "{html}");
+    // Its findings and its posts' findings, in the words of their basis.
+    assert!(html.contains("BEYOND REFERENCE"), "{html}");
+    assert!(html.contains("TO BE EVALUATED"), "{html}");
+    assert!(html.contains("id=\"girder-plies\""), "{html}");
+}
+
+#[test]
+fn post_screen_shows_its_findings_and_fields() {
+    let html = render("/post/post-2");
+    assert!(html.contains("Post 2"), "{html}");
+    assert!(
+        html.contains("The footing under the post cannot be seen"),
+        "{html}"
+    );
+    assert!(html.contains("not fully checked"), "{html}");
+    assert!(html.contains("id=\"post-footing-visible\""), "{html}");
+}
+
+#[test]
+fn area_lists_girders_and_the_conditions_of_the_space() {
+    let html = render("/area/area-crawl");
+    assert!(html.contains("Girders and posts"), "{html}");
+    assert!(html.contains("Centre girder"));
+    assert!(html.contains("id=\"site-vapor-retarder\""), "{html}");
+    assert!(html.contains("The space under the floor"));
+}
+
+#[test]
+fn run_screen_links_its_girder() {
+    let html = render("/run/run-kitchen");
+    assert!(html.contains("Bears on"), "{html}");
+    assert!(html.contains("Centre girder (Crawlspace under kitchen and dining room)"));
+}

@@ -1,10 +1,12 @@
-//! One area: its joist runs and single members; add a run (copying the previous one's values)
-//! or a single member.
+//! One area: its joist runs, single members and girder lines; add a run (copying the previous
+//! one's values), a single member or a girder line; the conditions of the space, saved as
+//! they are picked.
 
-use crate::components::Photos;
+use crate::components::{PathChange, PathFields, Photos};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::model::{JoistRun, Member};
+use undercroft_core::forms::{field_text, site_with, FieldError, SITE_FIELDS};
+use undercroft_core::model::{GirderKind, GirderLine, JoistRun, Member};
 use undercroft_core::store::new_id;
 
 #[component]
@@ -21,6 +23,58 @@ pub fn AreaView(id: String) -> Element {
         return rsx! { main { p { "This area is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
     };
     let previous = area.runs.last().map(|r| r.framing.clone());
+    let units = inspection.units;
+    let mut site_texts = use_signal(|| {
+        SITE_FIELDS
+            .iter()
+            .map(|f| field_text(&area.conditions, f, units))
+            .collect::<Vec<_>>()
+    });
+    let mut site_errors = use_signal(Vec::<FieldError>::new);
+    let save_site = {
+        let app = app.clone();
+        let id = id.clone();
+        use_callback(move |(name, text): PathChange| {
+            if let Some(i) = SITE_FIELDS.iter().position(|f| f.name == name) {
+                site_texts.write()[i] = text.clone();
+            }
+            let Some(mut current) = app
+                .inspection_holding(&id)
+                .and_then(|i| i.area(&id).cloned())
+            else {
+                return;
+            };
+            let mut errs: Vec<FieldError> = Vec::new();
+            match site_with(&current.conditions, name, &text, units) {
+                Ok(conditions) => {
+                    current.conditions = conditions;
+                    if let Err(message) = app.change(|s| s.update_area(&current)) {
+                        errs.push(FieldError {
+                            field: "save",
+                            message,
+                        });
+                    }
+                }
+                Err(e) => errs.push(e),
+            }
+            site_errors.set(errs);
+        })
+    };
+    let mut girder_label = use_signal(String::new);
+    let add_girder = {
+        let app = app.clone();
+        let area_id = id.clone();
+        move |_| {
+            let mut line = GirderLine::new(new_id(), label_or(girder_label(), "Girder"));
+            line.kind = GirderKind::BuiltUp;
+            match app.change(|s| s.add_girder(&area_id, &line)) {
+                Ok(()) => {
+                    navigator().push(Route::GirderScreen { id: line.id });
+                }
+                Err(e) => error.set(Some(e)),
+            }
+        }
+    };
     let area_id = id.clone();
     let add = {
         let app = app.clone();
@@ -87,6 +141,24 @@ pub fn AreaView(id: String) -> Element {
             label { r#for: "member-name", "A single member" }
             input { id: "member-name", placeholder: "Header at the stair opening", value: "{member_label}", oninput: move |e| member_label.set(e.value()) }
             button { class: "quiet", id: "add-member", onclick: add_member, "Add member" }
+            h2 { "Girders and posts" }
+            if area.girders.is_empty() {
+                p { class: "muted", "None yet: a girder or beam the joists bear on, with its posts." }
+            }
+            ul { class: "list",
+                for g in area.girders.iter() {
+                    li { key: "{g.id}",
+                        Link { to: Route::GirderScreen { id: g.id.clone() },
+                            "{g.label}"
+                            br {}
+                            span { class: "muted", "{g.posts.len()} posts" }
+                        }
+                    }
+                }
+            }
+            label { r#for: "girder-label", "A girder line" }
+            input { id: "girder-label", placeholder: "Centre girder", value: "{girder_label}", oninput: move |e| girder_label.set(e.value()) }
+            button { class: "quiet", id: "add-girder", onclick: add_girder, "Add girder" }
             h2 { "Add a joist run" }
             label { r#for: "run-label", "Label" }
             input { id: "run-label", placeholder: "Joists between the rim and the girder", value: "{label}", oninput: move |e| label.set(e.value()) }
@@ -98,6 +170,11 @@ pub fn AreaView(id: String) -> Element {
                 p { class: "field-error", "{e}" }
             }
             button { id: "add-run", onclick: add, "Add run" }
+            h2 { "The space under the floor" }
+            PathFields { prefix: "site", fields: SITE_FIELDS, values: site_texts(), errors: site_errors(), on_change: save_site }
+            for e in site_errors().iter().filter(|e| e.field == "save") {
+                p { class: "field-error", "Not saved: {e.message}" }
+            }
             Photos { owner: id.clone() }
         }
     }

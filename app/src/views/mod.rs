@@ -2,20 +2,24 @@
 
 mod area;
 mod findings;
+mod girder;
 mod inspection;
 mod inspections;
 mod member;
 mod observation;
+mod post;
 mod report;
 mod run;
 mod settings;
 
 pub use area::AreaView;
 pub use findings::Findings;
+pub use girder::GirderScreen;
 pub use inspection::InspectionView;
 pub use inspections::Inspections;
 pub use member::MemberView;
 pub use observation::ObservationView;
+pub use post::PostScreen;
 pub use report::ReportView;
 pub use run::RunView;
 pub use settings::SettingsView;

@@ -55,11 +55,61 @@ pub fn RunView(id: String) -> Element {
             }
         }
     };
+    // The girder lines anywhere in the inspection, and whether this run bears on each.
+    let girders: Vec<(String, String, bool)> = inspection
+        .areas
+        .iter()
+        .flat_map(|a| a.girders.iter().map(move |g| (a, g)))
+        .map(|(a, g)| {
+            (
+                g.id.clone(),
+                format!("{} ({})", g.label, a.name),
+                run.bears_on.contains(&g.id),
+            )
+        })
+        .collect();
+    let mut link_error = use_signal(|| None::<String>);
+    let link = {
+        let app = app.clone();
+        let run_id = id.clone();
+        let bears_on = run.bears_on.clone();
+        move |(girder, on): (String, bool)| {
+            let mut next: Vec<String> =
+                bears_on.iter().filter(|g| **g != girder).cloned().collect();
+            if on {
+                next.push(girder);
+            }
+            if let Err(e) = app.change(|s| s.set_bears_on(&run_id, &next)) {
+                link_error.set(Some(e));
+            }
+        }
+    };
     rsx! {
         main {
             nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
             h1 { "{run.label}" }
             LiveCard { check }
+            if !girders.is_empty() {
+                h2 { "Bears on" }
+                p { class: "muted", "The girder carries half of this run's span." }
+                div { class: "checks", id: "bears-on",
+                    for (gid, name, on) in girders {
+                        label { key: "{gid}",
+                            input { r#type: "checkbox", checked: on,
+                                onchange: {
+                                    let mut link = link.clone();
+                                    let gid = gid.clone();
+                                    move |e: Event<FormData>| link((gid.clone(), e.checked()))
+                                }
+                            }
+                            " {name}"
+                        }
+                    }
+                }
+                if let Some(e) = link_error() {
+                    p { class: "field-error", role: "alert", "{e}" }
+                }
+            }
             FramingFields { form: form(), base: None, on_change: save }
             for e in errors() {
                 p { class: "field-error", "{e.field}: {e.message}" }
