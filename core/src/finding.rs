@@ -385,6 +385,9 @@ pub struct Finding {
     pub status: Status,
     pub place: Place,
     pub observation_id: Option<Arc<str>>,
+    /// Which part of the member the finding is about, where a rule makes several findings
+    /// on one member with no observation (a girder's spans, its ends, a post's conditions).
+    pub part: Option<Text>,
     pub checks: Vec<Check>,
     /// Index in `checks` of the governing criterion (the highest use of its limit).
     pub governing: Option<usize>,
@@ -422,13 +425,17 @@ impl Finding {
     pub fn rule_id(&self) -> &'static str {
         self.rule.id
     }
-    /// A stable identity for notes kept on this finding: rule id / member id / observation id.
+    /// A stable identity for notes kept on this finding: rule id / member id / observation
+    /// id (or the part of the member, or "-").
     pub fn key(&self) -> String {
         format!(
             "{}/{}/{}",
             self.rule.id,
             self.place.member_id,
-            self.observation_id.as_deref().unwrap_or("-")
+            self.observation_id
+                .as_deref()
+                .or(self.part.as_deref())
+                .unwrap_or("-")
         )
     }
     pub fn title(&self) -> &'static str {
@@ -557,6 +564,7 @@ impl FindingBuilder {
                 status: Status::NotChecked,
                 place: ctx.place.clone(),
                 observation_id: observation_id.cloned(),
+                part: None,
                 checks: Vec::new(),
                 governing: None,
                 not_checked_because: None,
@@ -578,6 +586,7 @@ impl FindingBuilder {
                 status: Status::NotChecked,
                 place,
                 observation_id: None,
+                part: None,
                 checks: Vec::new(),
                 governing: None,
                 not_checked_because: None,
@@ -591,6 +600,12 @@ impl FindingBuilder {
 
     pub fn check(mut self, check: Check) -> Self {
         self.finding.checks.push(check);
+        self
+    }
+
+    /// Names the part of the member this finding is about (see `Finding::part`).
+    pub fn part(mut self, part: impl Into<Text>) -> Self {
+        self.finding.part = Some(part.into());
         self
     }
 

@@ -343,9 +343,47 @@ fn rules_lists_every_id() {
         "bearing-length",
         "bridging",
         "sag-reading",
+        "deck-joist-span",
+        "girder-strength",
+        "post-capacity",
+        "post-footing",
+        "crawlspace-conditions",
     ] {
         assert!(text.contains(id), "{id} missing");
     }
+}
+
+#[test]
+fn check_covers_the_load_path_and_questions_impossible_posts() {
+    let o = undercroft(&["check", "--json", &demo()]);
+    assert!(o.status.success(), "{}", stderr(&o));
+    let v: serde_json::Value = serde_json::from_str(&stdout(&o)).unwrap();
+    let findings = v["findings"].as_array().unwrap();
+    let over_span = findings
+        .iter()
+        .find(|f| f["rule_id"] == "girder-strength" && f["status"] == "over-limit")
+        .expect("the demo girder's long span");
+    assert_eq!(over_span["basis"], "reference");
+    assert_eq!(over_span["status_label"], "BEYOND REFERENCE");
+    let hidden = findings
+        .iter()
+        .find(|f| f["rule_id"] == "post-footing" && f["member_id"] == "post-2")
+        .unwrap();
+    assert_eq!(hidden["status"], "not-checked");
+
+    // A post typed past the girder's end is an input problem, not a guess.
+    let mut inspection: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(demo()).unwrap()).unwrap();
+    inspection["areas"][0]["girders"][0]["posts"][1]["at"] = serde_json::json!("30' 0\"");
+    let dir = TempStore::new("load-path");
+    let file = dir.0.join("far-post.json");
+    std::fs::write(&file, inspection.to_string()).unwrap();
+    let o = undercroft(&["check", &file.display().to_string()]);
+    let text = stdout(&o);
+    assert!(
+        text.contains("Post 2 is placed 360.0 in from end A, not between the ends; post not used"),
+        "{text}"
+    );
 }
 
 /// A temporary folder for a store, removed at the end.

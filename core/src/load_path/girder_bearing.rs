@@ -54,10 +54,14 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
                     Some(b) => (b.length, b.on),
                     None => {
                         out.push(
-                            FindingBuilder::at(&RULE, g.place.clone(), &g.common).not_checked(
-                                format!("the bearing at {} is not recorded", s.name()),
-                                Detail::Missing("Record what the girder end sits on and how far."),
-                            ),
+                            FindingBuilder::at(&RULE, g.place.clone(), &g.common)
+                                .part(end_part(end))
+                                .not_checked(
+                                    format!("the bearing at {} is not recorded", s.name()),
+                                    Detail::Missing(
+                                        "Record what the girder end sits on and how far.",
+                                    ),
+                                ),
                         );
                         continue;
                     }
@@ -82,6 +86,13 @@ fn post_bearing(post: &crate::model::Post) -> Option<Length> {
     })
 }
 
+fn end_part(end: crate::model::End) -> &'static str {
+    match end {
+        crate::model::End::A => "end-a",
+        crate::model::End::B => "end-b",
+    }
+}
+
 fn post_support(material: PostMaterial) -> BearingSupport {
     match material {
         PostMaterial::Wood => BearingSupport::Wood,
@@ -97,6 +108,9 @@ fn one(g: &GirderContext, s: &Support, length: Option<Length>, on: BearingSuppor
         None => g.place.clone(),
     };
     let mut b = FindingBuilder::at(&RULE, place, &g.common);
+    if let (Some(end), None) = (s.end, s.post) {
+        b = b.part(end_part(end));
+    }
     let what = format!("bearing at {}", s.name());
     let sawn = g
         .lumber

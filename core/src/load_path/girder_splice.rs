@@ -33,7 +33,7 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
     if g.line.kind != GirderKind::BuiltUp {
         return;
     }
-    for at in &g.line.splices {
+    for (n, at) in g.line.splices.iter().enumerate() {
         let over = g
             .supports
             .iter()
@@ -41,6 +41,7 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
             .map(|s| s.name());
         out.push(
             FindingBuilder::at(&RULE, g.place.clone(), &g.common)
+                .part(format!("joint-{}", n + 1))
                 .check(Check::qualitative(
                     format!("ply joint at {}", len(g.common.units, *at)),
                     over.clone()

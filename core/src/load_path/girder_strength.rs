@@ -93,7 +93,7 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
             repetitive: false,
         };
         let Some(c) = check_beam(&input) else {
-            out.push(b().not_checked(
+            out.push(b().part(format!("span-{}", i + 1)).not_checked(
                 format!("span {} could not be computed", i + 1),
                 Detail::Missing("Check the girder's entries."),
             ));
@@ -113,34 +113,35 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
             deflection_denominator,
         };
         out.push(
-            b().check(Check::numeric(
-                "bending stress",
-                Value::Psi(c.bending.0),
-                Value::Psi(c.bending.1),
-                Bound::AtMost,
-                u,
-            ))
-            .check(Check::numeric(
-                "shear stress",
-                Value::Psi(c.shear.0),
-                Value::Psi(c.shear.1),
-                Bound::AtMost,
-                u,
-            ))
-            .check(Check::numeric(
-                "live-load deflection",
-                Value::Length(Length::inches(c.deflection.0)),
-                Value::Length(Length::inches(c.deflection.1)),
-                Bound::AtMost,
-                u,
-            ))
-            .finish(Detail::Path(Box::new(PathDetail::Strength(
-                StrengthDetail::Span(Box::new(detail)),
-            )))),
+            b().part(format!("span-{}", i + 1))
+                .check(Check::numeric(
+                    "bending stress",
+                    Value::Psi(c.bending.0),
+                    Value::Psi(c.bending.1),
+                    Bound::AtMost,
+                    u,
+                ))
+                .check(Check::numeric(
+                    "shear stress",
+                    Value::Psi(c.shear.0),
+                    Value::Psi(c.shear.1),
+                    Bound::AtMost,
+                    u,
+                ))
+                .check(Check::numeric(
+                    "live-load deflection",
+                    Value::Length(Length::inches(c.deflection.0)),
+                    Value::Length(Length::inches(c.deflection.1)),
+                    Bound::AtMost,
+                    u,
+                ))
+                .finish(Detail::Path(Box::new(PathDetail::Strength(
+                    StrengthDetail::Span(Box::new(detail)),
+                )))),
         );
     }
     if g.line.length.is_none() && g.supports.len() > 1 {
-        out.push(b().not_checked(
+        out.push(b().part("past-last-post").not_checked(
             "the girder's length is not entered, so the span past the last post is not known",
             Detail::Missing("Measure the girder from end A to end B."),
         ));

@@ -25,11 +25,12 @@ pub enum ConditionDetail {
 
 pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
     for post in g.supports.iter().filter_map(|s| s.post) {
-        let mut seen: Vec<ConditionDetail> = post
-            .conditions
-            .iter()
-            .map(|c| ConditionDetail::Seen(*c))
-            .collect();
+        let mut seen: Vec<ConditionDetail> = Vec::new();
+        for c in &post.conditions {
+            if !seen.contains(&ConditionDetail::Seen(*c)) {
+                seen.push(ConditionDetail::Seen(*c));
+            }
+        }
         if let Some(on @ (PostBase::StackedBlock | PostBase::WoodBlock)) = post.stands_on {
             if !post.conditions.contains(&PostCondition::StackedBlocks) {
                 seen.push(ConditionDetail::StandsOn(on));
@@ -38,8 +39,24 @@ pub fn check(g: &GirderContext, out: &mut Vec<Finding>) {
         for d in seen {
             out.push(
                 FindingBuilder::at(&RULE, g.post_place(post), &g.common)
+                    .part(d.key())
                     .observed(Detail::Path(Box::new(PathDetail::Condition(d)))),
             );
+        }
+    }
+}
+
+impl ConditionDetail {
+    /// The part of a finding's key: which condition.
+    pub fn key(&self) -> &'static str {
+        match self {
+            ConditionDetail::Seen(PostCondition::Shimmed) => "shimmed",
+            ConditionDetail::Seen(PostCondition::StackedBlocks) => "stacked-blocks",
+            ConditionDetail::Seen(PostCondition::Cracked) => "cracked",
+            ConditionDetail::Seen(PostCondition::Leaning) => "leaning",
+            ConditionDetail::Seen(PostCondition::Decay) => "decay",
+            ConditionDetail::Seen(PostCondition::Settled) => "settled",
+            ConditionDetail::StandsOn(_) => "stands-on",
         }
     }
 }

@@ -48,8 +48,15 @@ pub fn check(area: &Area, common: &Common, out: &mut Vec<Finding>) {
         location: Arc::from(area.name.as_str()),
     };
     for d in seen {
+        let part = match d {
+            SiteDetail::StandingWater => "standing-water",
+            SiteDetail::FungalGrowth => "fungal-growth",
+            SiteDetail::NoGroundCover(_) => "ground-cover",
+            SiteDetail::Ventilation(_) => "ventilation",
+        };
         out.push(
             FindingBuilder::at(&RULE, place.clone(), common)
+                .part(part)
                 .observed(Detail::Path(Box::new(PathDetail::Site(d)))),
         );
     }

@@ -193,3 +193,24 @@ fn standing_water_leaves_unmeasured_spans_not_fully_checked() {
         .unwrap()
         .contains("standing water"));
 }
+
+/// Notes on findings and the app's lists are keyed by `Finding::key`: no two findings of an
+/// inspection share one, even where a rule makes several on one member (spans, ends,
+/// conditions), or a file repeats a condition.
+#[test]
+fn every_finding_has_its_own_key() {
+    let mut repeated = demo();
+    repeated.areas[0].girders[0].posts[0].conditions =
+        vec![crate::model::PostCondition::Shimmed; 3];
+    for i in [
+        demo(),
+        crate::generate::inspection_with_load_path(500, 20, 3),
+        repeated,
+    ] {
+        let findings = crate::evaluate(&i).findings;
+        let mut keys = std::collections::HashSet::new();
+        for f in &findings {
+            assert!(keys.insert(f.key()), "{} is repeated", f.key());
+        }
+    }
+}
