@@ -123,6 +123,7 @@ fn render(store: &Store, inspection: &Inspection, paper: Paper) -> Vec<u8> {
         notes: &notes,
         photo_files: &files,
         paper,
+        repair_options: false,
     }))
 }
 
@@ -135,6 +136,7 @@ fn render_without_store(inspection: &Inspection, paper: Paper) -> Vec<u8> {
         notes: &[],
         photo_files: &PhotoFiles::new(),
         paper,
+        repair_options: false,
     }))
 }
 
@@ -148,6 +150,7 @@ fn report_value_snapshot() {
         notes: &[],
         photo_files: &PhotoFiles::new(),
         paper: Paper::Letter,
+        repair_options: false,
     });
     insta::assert_json_snapshot!(report);
 }

@@ -56,10 +56,7 @@ fn inspection_list() {
 #[test]
 fn inspection_shows_areas_with_counts_over() {
     let html = render(&format!("/inspection/{DEMO}"));
-    assert!(
-        html.contains("Crawlspace under kitchen and dining room"),
-        "{html}"
-    );
+    assert!(html.contains("Kitchen crawlspace"), "{html}");
     assert!(html.contains("Basement under the bedrooms"));
     // Code limits and engineering references over (25, with the load path and the porch),
     // and the demo's decay, cut joist, shimmed post and torn ground cover as observed
@@ -74,10 +71,7 @@ fn inspection_shows_areas_with_counts_over() {
 #[test]
 fn area_lists_runs() {
     let html = render("/area/area-crawl");
-    assert!(
-        html.contains("Kitchen joists, east foundation wall to centre girder"),
-        "{html}"
-    );
+    assert!(html.contains("Kitchen joists"), "{html}");
     assert!(html.contains("Dining room joists"));
     assert!(html.contains("Same values as the previous run"));
 }
@@ -146,8 +140,7 @@ fn observation_shows_verdict_citation_and_side_view() {
 fn run_lists_its_observations_and_the_kinds_to_add() {
     let kitchen = render("/run/run-kitchen");
     assert!(
-        kitchen.contains("Joist 7 from the north wall")
-            && kitchen.contains("Add a joist of this run"),
+        kitchen.contains("Joist 7") && kitchen.contains("Add a joist of this run"),
         "{kitchen}"
     );
     let html = render("/run/run-dining");
@@ -261,5 +254,5 @@ fn area_lists_girders_and_the_conditions_of_the_space() {
 fn run_screen_links_its_girder() {
     let html = render("/run/run-kitchen");
     assert!(html.contains("Bears on"), "{html}");
-    assert!(html.contains("Centre girder (Crawlspace under kitchen and dining room)"));
+    assert!(html.contains("Centre girder (Kitchen crawlspace)"));
 }

@@ -63,6 +63,7 @@ fn build(store: &Store, out: &Path) -> usize {
         notes: &[],
         photo_files: &files,
         paper: Paper::Letter,
+        repair_options: false,
     });
     let bytes = pdf::render(&report);
     std::fs::write(out, &bytes).unwrap();

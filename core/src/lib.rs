@@ -12,6 +12,7 @@ pub mod lumber;
 pub mod mechanics;
 pub mod model;
 pub mod photo;
+pub mod priority;
 pub mod report;
 pub mod rules;
 mod serde_text;

@@ -132,6 +132,9 @@ pub struct MemberContext<'a> {
     /// Standing water or fungal growth recorded in the area, where no moisture reading was
     /// taken on the member: wet service is then not ruled out.
     pub wetting_unmeasured: Option<&'static str>,
+    /// Inputs that were entered but refused (out of range): a check that needs one says so,
+    /// never "not entered".
+    pub refused: Vec<&'static str>,
 }
 
 impl MemberContext<'_> {
@@ -156,9 +159,12 @@ impl MemberContext<'_> {
 /// Photo references that cannot be what was meant: attached to nothing in the inspection, or
 /// naming a file outside it (an absolute path or `..`).
 fn photo_problems(inspection: &Inspection) -> Vec<Problem> {
+    // The inspection itself may own a photo (the front of the house).
+    let photo_ids: std::collections::HashSet<&str> =
+        inspection.photos.iter().map(|p| p.id.as_str()).collect();
     let owners: std::collections::HashSet<&str> = crate::model::renumber::ids_of(inspection)
         .into_iter()
-        .skip(1)
+        .filter(|id| !photo_ids.contains(id))
         .collect();
     let mut out = Vec::new();
     for p in &inspection.photos {
@@ -167,7 +173,7 @@ fn photo_problems(inspection: &Inspection) -> Vec<Problem> {
             out.push(Problem {
                 location: location.clone(),
                 message: format!(
-                    "attached to \"{}\", which is no area, run, member or observation of this inspection; not shown",
+                    "attached to \"{}\", which is not this inspection nor any of its areas, runs, members, girders, posts or observations; not shown",
                     p.attached_to
                 ),
             });
@@ -325,11 +331,16 @@ impl<'a> Shared<'a> {
         if framing.size.is_none() && framing.actual.is_none() {
             lumber_missing.push("size");
         }
+        let mut refused = Vec::new();
         let section = match (framing.size, framing.actual) {
             (nominal, Some(actual)) => {
                 match Section::from_dimensions(actual.thickness, actual.depth, nominal) {
                     Ok(s) => Some(s),
                     Err(e) => {
+                        refused.push("size");
+                        if !lumber_missing.contains(&"size") {
+                            lumber_missing.push("size");
+                        }
                         problem(format!("actual size: {e}; size not used"));
                         None
                     }
@@ -350,6 +361,7 @@ impl<'a> Shared<'a> {
         };
         if let Some(spacing) = framing.spacing {
             if !(4.0..=48.0).contains(&spacing.in_inches()) {
+                refused.push("spacing");
                 problem(format!(
                     "spacing {} in is outside 4 to 48 in; spacing not used",
                     spacing.in_inches()
@@ -454,6 +466,7 @@ impl<'a> Shared<'a> {
             area_kind: self.kind,
             incised,
             wetting_unmeasured,
+            refused,
         }
     }
 }

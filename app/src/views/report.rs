@@ -47,6 +47,7 @@ pub fn ReportView(id: String) -> Element {
     let mut progress = use_signal(|| None::<String>);
     let mut built = use_signal(|| None::<std::path::PathBuf>);
     let mut paper = use_signal(|| "letter".to_string());
+    let mut options = use_signal(|| false);
     let (inspection, deliveries) = {
         let store = app.store.borrow();
         (
@@ -94,6 +95,7 @@ pub fn ReportView(id: String) -> Element {
                     notes: &notes,
                     photo_files: &files,
                     paper,
+                    repair_options: options(),
                 });
                 let bytes = pdf::render(&report);
                 progress.set(Some("Saving the PDF...".into()));
@@ -136,6 +138,13 @@ pub fn ReportView(id: String) -> Element {
             select { id: "paper", onchange: move |e| paper.set(e.value()),
                 option { value: "letter", selected: paper() == "letter", "Letter" }
                 option { value: "a4", selected: paper() == "a4", "A4" }
+            }
+            div { class: "checks",
+                label {
+                    input { r#type: "checkbox", id: "repair-options", checked: options(),
+                        onchange: move |e| options.set(e.checked()) }
+                    " Include the computed repair options (for a contractor or engineer reader)"
+                }
             }
             p { button { id: "build-report", onclick: build, "Build the report" } }
             if let Some(line) = progress() {

@@ -1,12 +1,17 @@
 //! The client report: first a plain `Report` value built from an inspection and its findings
-//! (sections, tables, findings, photo references, drawings as geometry), then a PDF printer
-//! that only renders that value.
+//! (what must be done first, numbered findings grouped where alike, checks met as tables,
+//! photos and drawings as numbered figures), then a PDF printer that only renders that value.
 
+mod appendix;
+mod areas;
 mod build;
 mod girder_view;
+mod grouping;
 mod model;
 pub mod pdf;
+mod renumber;
 mod side_view;
+mod wording;
 
 pub use build::{build_report, PhotoFiles, ReportInput};
 pub use girder_view::girder_view_of;

@@ -37,11 +37,27 @@ pub struct Report {
     pub paper: Paper,
     /// Shown at the top of every page.
     pub running_head: String,
+    /// The PDF's own title, author and subject.
+    pub meta: Meta,
     pub cover: Cover,
-    pub summary: Summary,
+    /// The first page: what must be done, by whom and how soon.
+    pub actions: Actions,
     pub areas: Vec<AreaSection>,
+    /// The inspector's signed statement.
+    pub attestation: Attestation,
+    /// For the professional reader: each numbered finding's rule and citation.
+    pub professional: Vec<ProfessionalNote>,
+    /// The assumptions behind the findings, each said once with the findings it is behind.
+    pub assumptions: Vec<(String, Vec<usize>)>,
     pub appendix: Vec<TextSection>,
     pub limits: TextSection,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Meta {
+    pub title: String,
+    pub author: String,
+    pub subject: String,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -51,31 +67,60 @@ pub struct Cover {
     /// Label and value pairs: client, inspector, company, license, date, conditions, code...
     pub facts: Vec<(String, String)>,
     pub notice: String,
+    /// A photo of the house, when the inspector took one.
+    pub photo: Option<Figure>,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct Summary {
-    /// Counts by basis and status, the bases kept apart.
+pub struct Actions {
+    /// How many findings need action, in one sentence.
+    pub lead: String,
+    /// The action items in groups of one priority, most pressing first; empty groups left out.
+    pub groups: Vec<ActionGroup>,
+    /// Entries the engine could not use: for the inspector to correct.
+    pub input_problems: Vec<ProblemLine>,
+    /// Findings the inspector set aside, with why.
+    pub set_aside: Vec<ProblemLine>,
+    /// Counts by basis and status, in words.
     pub counts: String,
-    /// How the code edition stands to this house (a benchmark for an existing house).
+    /// How the code edition stands to this house.
     pub benchmark: Option<String>,
-    /// Findings that need attention, in groups that keep code limits, engineering references
-    /// and observed conditions apart; empty groups left out.
-    pub groups: Vec<SummaryGroup>,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct SummaryGroup {
-    pub title: String,
-    pub lines: Vec<SummaryLine>,
+pub struct ActionGroup {
+    /// "Engineer first".
+    pub label: String,
+    /// Who acts and how soon, in a sentence.
+    pub meaning: String,
+    pub items: Vec<ActionItem>,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct SummaryLine {
-    /// "112 %" or the status when there is no ratio.
-    pub use_text: String,
-    pub text: String,
+pub struct ActionItem {
+    /// The finding's number in the report.
+    pub number: usize,
+    /// One plain sentence: what, where it stands against its limit.
+    pub sentence: String,
     pub location: String,
+    /// The status on its basis and the provision cited: "Over the code limit: IRC 2018 R502.6".
+    pub basis: String,
+    /// Where else the same finding was made, for a finding of several joists or posts.
+    pub also_at: Vec<String>,
+    pub what_to_do: String,
+    pub note: Option<String>,
+    /// Computed repair options, only when the inspector turned them on.
+    pub options: Vec<String>,
+    /// The finding's own photos.
+    pub photos: Vec<Figure>,
+    /// Figure numbers of drawings of the members it is about.
+    pub drawings: Vec<usize>,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct ProblemLine {
+    pub location: String,
+    pub text: String,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -84,52 +129,71 @@ pub struct AreaSection {
     /// Kind of area and the loads used.
     pub about: String,
     pub notes: String,
-    pub members: Vec<MemberRow>,
-    pub findings: Vec<FindingBlock>,
-    pub views: Vec<SideView>,
+    /// Numbered findings the inspector said need no action (those that need action are told
+    /// in full on the first pages).
+    pub findings: Vec<NotedRow>,
+    /// Checks met: what was checked, where, measured and limit, alike rows merged.
+    pub checked: Vec<CheckedRow>,
+    /// Scaled side views of joists with notches, holes or sag readings.
+    pub views: Vec<Drawing<SideView>>,
     /// Each girder line with its posts, spans and loads.
-    pub girders: Vec<GirderView>,
+    pub girders: Vec<Drawing<GirderView>>,
     /// Photos of the area itself, and any not placed with a finding.
-    pub photos: Vec<PhotoSlot>,
+    pub photos: Vec<Figure>,
 }
 
-/// One row of an area's member table.
+/// A drawing with its figure number.
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct MemberRow {
-    pub member: String,
-    pub size: String,
-    pub species_grade: String,
-    pub spacing: String,
-    pub span: String,
-    pub allowable: String,
-    pub use_text: String,
-    pub governs: String,
+pub struct Drawing<T> {
+    pub figure: usize,
+    pub view: T,
 }
 
+/// A numbered finding as a table row.
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct FindingBlock {
-    /// "OVER LIMIT 130 %", "within 52 %", "not checked".
-    pub badge: String,
-    pub over: bool,
-    pub title: String,
-    pub rule_id: String,
+pub struct NotedRow {
+    pub number: usize,
+    pub status: String,
+    pub what: String,
     pub location: String,
-    pub summary: String,
-    /// Label and value: measured, limit, use, citation.
-    pub facts: Vec<(String, String)>,
-    pub assumptions: Vec<String>,
-    pub options: Vec<String>,
-    pub recommendation: String,
-    pub note: Option<String>,
-    pub not_applicable: Option<String>,
-    pub photos: Vec<PhotoSlot>,
+    /// Measured against the limit, or why it was not checked.
+    pub detail: String,
+    /// Photos and drawings of it.
+    pub figures: Vec<usize>,
 }
 
+/// A check met, as a table row.
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct PhotoSlot {
+pub struct CheckedRow {
+    pub what: String,
+    pub location: String,
+    pub measured: String,
+    pub limit: String,
+}
+
+/// A photo with its figure number and caption.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Figure {
+    pub number: usize,
     pub caption: String,
     /// The stored report-size JPEG, when it is on this device.
     pub file: Option<PathBuf>,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Attestation {
+    pub statement: String,
+    /// Label and value: inspector, license, company, date.
+    pub lines: Vec<(String, String)>,
+}
+
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct ProfessionalNote {
+    pub number: usize,
+    pub rule_id: String,
+    pub citation: String,
+    /// Every check made, with its numbers.
+    pub checks: Vec<String>,
 }
 
 /// A scaled side view of one joist: supports, end zones, middle third, defects, sag.

@@ -162,7 +162,7 @@ fn one(
         let required = result.required_bearing(span);
         reaction = Some((result.reaction_lb(span), required, result.fc_perp().0));
         b = b.check(Check::numeric(
-            "bearing for the computed reaction (Fc-perp)",
+            "bearing the computed reaction needs on the wood",
             Value::Length(sound.unwrap_or(length)),
             Value::Length(required),
             Bound::AtLeast,

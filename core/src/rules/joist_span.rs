@@ -149,7 +149,7 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
         missing.is_empty(),
     ) else {
         out.push(b.not_checked(
-            format!("{} not entered", missing.join(", ")),
+            missing_text(ctx, &missing),
             Detail::Missing("Measure and enter the missing values to check the span."),
         ));
         return;
@@ -253,6 +253,23 @@ pub fn outside_deck_tables(ctx: &MemberContext) -> Vec<&'static str> {
     out
 }
 
+/// What is missing, in words: refused entries said as refused, never as "not entered".
+pub fn missing_text(ctx: &MemberContext, missing: &[&'static str]) -> String {
+    let (refused, absent): (Vec<&str>, Vec<&str>) =
+        missing.iter().partition(|m| ctx.refused.contains(m));
+    let mut parts = Vec::new();
+    if !absent.is_empty() {
+        parts.push(format!("{} not entered", absent.join(", ")));
+    }
+    if !refused.is_empty() {
+        parts.push(format!(
+            "{} entered but out of range (see the entries that could not be used)",
+            refused.join(", ")
+        ));
+    }
+    parts.join("; ")
+}
+
 fn missing_inputs(ctx: &MemberContext) -> Vec<&'static str> {
     let mut missing: Vec<&'static str> = ctx.lumber_missing.clone();
     if ctx.framing.spacing.is_none() {
@@ -276,7 +293,7 @@ impl Wording for SpanDetail {
                 d.nominal,
                 d.species.name(),
                 d.grade,
-                dim(u, d.spacing),
+                crate::units::format_spacing(d.spacing, u),
                 len(u, d.span),
                 len(u, d.allowable),
                 d.governing.name(),
@@ -303,7 +320,7 @@ impl Wording for SpanDetail {
             out.push(format!(
                 "Spacing taped at {} is held to the standard {} layout (within framing tolerance)",
                 dim(u, taped),
-                dim(u, d.spacing)
+                crate::units::format_spacing(d.spacing, u)
             ));
         }
         if let Some(ext) = d.exterior {

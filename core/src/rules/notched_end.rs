@@ -64,7 +64,7 @@ pub fn check(ctx: &MemberContext, out: &mut Vec<Finding>) {
         let reaction = result.reaction_lb(span);
         out.push(
             b.check(Check::numeric(
-                "end reaction against the notched end's shear capacity Vr'",
+                "end reaction against the shear the notched end can carry",
                 Value::Pounds(reaction),
                 Value::Pounds(capacity),
                 Bound::AtMost,

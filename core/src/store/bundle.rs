@@ -307,9 +307,9 @@ impl Store {
         fill_photo_details(&self.photos, &tx, &inspection.id)?;
         for note in notes {
             tx.execute(
-                "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, updated_at)
-                 VALUES (?1, ?2, ?3, ?4, ?5, ?6)",
-                rusqlite::params![inspection.id, note.key, note.note, note.recommendation, note.not_applicable_reason, now],
+                "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, priority, updated_at)
+                 VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
+                rusqlite::params![inspection.id, note.key, note.note, note.recommendation, note.not_applicable_reason, note.priority.map(|p| p.key()), now],
             )?;
         }
         tx.commit()?;

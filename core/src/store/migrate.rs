@@ -27,6 +27,10 @@ const MIGRATIONS: &[Migration] = &[
         sql: include_str!("../../../migrations/0004_load_path.sql"),
         after: None,
     },
+    Migration {
+        sql: include_str!("../../../migrations/0005_finding_priority.sql"),
+        after: None,
+    },
 ];
 
 /// The `application_id` a store of ours carries from version 3 ("UNDC").

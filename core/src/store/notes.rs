@@ -19,6 +19,9 @@ pub struct FindingNote {
     /// Set when the inspector marks the finding not applicable, with why.
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub not_applicable_reason: Option<String>,
+    /// Who should act and how soon, where the inspector changed it from the default.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub priority: Option<crate::priority::Priority>,
 }
 
 /// A report handed to the client.
@@ -35,16 +38,20 @@ impl Store {
     /// Saves (or, when everything is empty, clears) the inspector's note on a finding.
     pub fn set_finding_note(&mut self, inspection_id: &str, note: &FindingNote) -> Result<()> {
         self.edit(inspection_id, |tx| {
-            let empty = note.note.is_empty() && note.recommendation.is_none() && note.not_applicable_reason.is_none();
+            let empty = note.note.is_empty()
+                && note.recommendation.is_none()
+                && note.not_applicable_reason.is_none()
+                && note.priority.is_none();
+            let priority = note.priority.map(|p| p.key());
             if empty {
                 tx.execute("DELETE FROM finding_notes WHERE inspection_id = ?1 AND finding_key = ?2", params![inspection_id, note.key])?;
             } else {
                 tx.execute(
-                    "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, updated_at)
-                     VALUES (?1, ?2, ?3, ?4, ?5, ?6)
+                    "INSERT INTO finding_notes (inspection_id, finding_key, note, recommendation, not_applicable_reason, priority, updated_at)
+                     VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)
                      ON CONFLICT (inspection_id, finding_key) DO UPDATE SET note = ?3, recommendation = ?4,
-                        not_applicable_reason = ?5, updated_at = ?6",
-                    params![inspection_id, note.key, note.note, note.recommendation, note.not_applicable_reason, now_utc()],
+                        not_applicable_reason = ?5, priority = ?6, updated_at = ?7",
+                    params![inspection_id, note.key, note.note, note.recommendation, note.not_applicable_reason, priority, now_utc()],
                 )?;
             }
             Ok(())
@@ -53,7 +60,7 @@ impl Store {
 
     pub fn finding_notes(&self, inspection_id: &str) -> Result<Vec<FindingNote>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT finding_key, note, recommendation, not_applicable_reason FROM finding_notes
+            "SELECT finding_key, note, recommendation, not_applicable_reason, priority FROM finding_notes
              WHERE inspection_id = ?1 ORDER BY finding_key",
         )?;
         let rows = stmt.query_map([inspection_id], |r| {
@@ -62,6 +69,10 @@ impl Store {
                 note: r.get(1)?,
                 recommendation: r.get(2)?,
                 not_applicable_reason: r.get(3)?,
+                // A word this version does not know reads as "not changed".
+                priority: r
+                    .get::<_, Option<String>>(4)?
+                    .and_then(|p| crate::priority::Priority::parse(&p)),
             })
         })?;
         Ok(rows.collect::<rusqlite::Result<_>>()?)

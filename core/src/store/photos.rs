@@ -194,14 +194,10 @@ impl Store {
     }
 
     /// The inspection of a photo's owner, which must be an area, run, member or observation.
+    /// The inspection a photo's owner is in. The inspection itself may own a photo: the
+    /// front of the house, shown with the report's title.
     fn check_owner(&self, attached_to: &str) -> Result<String> {
-        let inspection_id = self.inspection_of(attached_to)?;
-        if inspection_id == attached_to {
-            return Err(StoreError::Invalid(
-                "a photo belongs to an area, run, member or observation".into(),
-            ));
-        }
-        Ok(inspection_id)
+        self.inspection_of(attached_to)
     }
 
     /// Size of an already stored report image of this content, if there is one made from a

@@ -488,6 +488,7 @@ fn bundles_round_trip_and_import_once() {
             &FindingNote {
                 key: "sawn-notch/joist-k7/obs-k7-notch".into(),
                 note: "seen from the hatch".into(),
+                priority: Some(crate::priority::Priority::OwnerWatch),
                 ..Default::default()
             },
         )
@@ -641,6 +642,7 @@ fn notes_and_reports() {
         note: String::new(),
         recommendation: None,
         not_applicable_reason: Some("Sill replaced last month; photo from the seller".into()),
+        priority: Some(crate::priority::Priority::ContractorSoon),
     };
     store.set_finding_note(&demo.id, &note).unwrap();
     assert_eq!(

@@ -29,6 +29,23 @@ pub fn format_dimension(length: Length, units: UnitSystem) -> String {
     }
 }
 
+/// A joist spacing: the 19.2 in layout (five joists to 8 ft) is shown as the trade and the
+/// code's tables name it, 19.2", not rounded to 19-3/16"; any other as a dimension.
+pub fn format_spacing(length: Length, units: UnitSystem) -> String {
+    let tenths = length.in_inches() * 10.0;
+    let on_tenths = (tenths - tenths.round()).abs() < 1e-6;
+    let on_grid = {
+        let s = length.in_inches() * 16.0;
+        (s - s.round()).abs() < 1e-6
+    };
+    match units {
+        UnitSystem::Imperial if on_tenths && !on_grid => {
+            format!("{:.1}\"", length.in_inches())
+        }
+        _ => format_dimension(length, units),
+    }
+}
+
 /// The grid lengths are shown on: 1/16 in, or 1 mm.
 fn display_step_inches(units: UnitSystem) -> f64 {
     match units {
@@ -137,6 +154,19 @@ mod tests {
         assert_eq!(
             format_dimension(Length::inches(19.2), UnitSystem::Imperial),
             "19-3/16\""
+        );
+        // Source: IRC 2018 Table R502.3.1(2) names the layout "19.2" in its column heads.
+        assert_eq!(
+            super::format_spacing(Length::inches(19.2), UnitSystem::Imperial),
+            "19.2\""
+        );
+        assert_eq!(
+            super::format_spacing(Length::inches(16.0), UnitSystem::Imperial),
+            "16\""
+        );
+        assert_eq!(
+            super::format_spacing(Length::inches(19.2), UnitSystem::Metric),
+            "488 mm"
         );
         assert_eq!(
             format_dimension(Length::inches(0.4375), UnitSystem::Imperial),

@@ -6,6 +6,8 @@ mod length_parse;
 mod load;
 
 pub use length::Length;
-pub use length_format::{format_dimension, format_length, round_down, round_up, UnitSystem};
+pub use length_format::{
+    format_dimension, format_length, format_spacing, round_down, round_up, UnitSystem,
+};
 pub use length_parse::{parse_length, LengthError};
 pub use load::{Psf, Psi};

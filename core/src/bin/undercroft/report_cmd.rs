@@ -27,6 +27,10 @@ pub struct ReportArgs {
     /// letter or a4.
     #[arg(long, default_value = "letter")]
     paper: String,
+    /// Show the computed repair options (sizes, spacings, supports) for a contractor or
+    /// engineer reader; left out of the client's report by default.
+    #[arg(long)]
+    repair_options: bool,
 }
 
 pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()> {
@@ -86,6 +90,7 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
         notes: &notes,
         photo_files: &photo_files,
         paper,
+        repair_options: args.repair_options,
     });
     let bytes = pdf::render(&report);
     // Written to a temporary name and renamed: a killed run leaves the old file whole.

@@ -8,15 +8,31 @@ use crate::report::SideView;
 const OVER: (f32, f32, f32) = (0.62, 0.1, 0.1);
 const DEFECT: (f32, f32, f32) = (0.2, 0.35, 0.6);
 const WOOD: (f32, f32, f32) = (0.93, 0.87, 0.74);
-const JOIST_HEIGHT: f32 = 44.0;
-const SAG_HEIGHT: f32 = 34.0;
+const JOIST_HEIGHT: f32 = 36.0;
+const SAG_HEIGHT: f32 = 28.0;
 
-pub fn side_view(w: &mut Writer, v: &SideView) {
+/// The height a side view takes on the page.
+pub fn side_view_height(v: &SideView) -> f32 {
+    14.0 + 24.0
+        + JOIST_HEIGHT
+        + 34.0
+        + if v.sag.is_empty() {
+            0.0
+        } else {
+            SAG_HEIGHT + 30.0
+        }
+}
+
+pub fn side_view(w: &mut Writer, v: &SideView, figure: usize) {
+    w.ensure(side_view_height(v));
     let has_sag = !v.sag.is_empty();
-    let total = 14.0 + 24.0 + JOIST_HEIGHT + 34.0 + if has_sag { SAG_HEIGHT + 30.0 } else { 0.0 };
-    w.ensure(total);
     let top = w.y;
-    let title = super::writer::fit(&v.title, 9.0, Face::Bold, w.content_width());
+    let title = super::writer::fit(
+        &format!("Figure {figure}. {}", v.title),
+        9.0,
+        Face::Bold,
+        w.content_width(),
+    );
     w.text_at(MARGIN, top - 10.0, &title, 9.0, Face::Bold, INK);
 
     let x0 = MARGIN + 24.0;
@@ -88,6 +104,7 @@ pub fn side_view(w: &mut Writer, v: &SideView) {
             } else {
                 base + JOIST_HEIGHT + 4.0 + (n % 2) as f32 * 8.0
             },
+            (x0 + 2.0, x0 + plot_w - 2.0),
             color,
             r.over,
         );
@@ -107,6 +124,7 @@ pub fn side_view(w: &mut Writer, v: &SideView) {
             &c.label,
             cx - 10.0,
             base - 10.0 - ((n + v.notches.len()) % 2) as f32 * 9.0,
+            (x0 + 2.0, x0 + plot_w - 2.0),
             color,
             c.over,
         );
@@ -162,12 +180,26 @@ pub fn side_view(w: &mut Writer, v: &SideView) {
     w.y = bottom - 8.0;
 }
 
-fn label(w: &mut Writer, text: &str, x: f32, y: f32, color: (f32, f32, f32), over: bool) {
+/// A defect's label, kept between the supports so it never sits over a support block or
+/// runs off the page: a label that would pass the right support ends at it.
+fn label(
+    w: &mut Writer,
+    text: &str,
+    x: f32,
+    y: f32,
+    (left, right): (f32, f32),
+    color: (f32, f32, f32),
+    over: bool,
+) {
     let text = if over {
         format!("{text} (over)")
     } else {
         text.to_string()
     };
+    let face = if over { Face::Bold } else { Face::Regular };
+    let text = super::writer::fit(&text, 7.0, face, right - left);
+    let width = fonts::width(&text, 7.0, face);
+    let x = x.min(right - width).max(left);
     w.text_at(
         x,
         y,

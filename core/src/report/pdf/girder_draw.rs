@@ -12,11 +12,18 @@ const SUPPORT: (f32, f32, f32) = (0.55, 0.55, 0.55);
 const GIRDER_HEIGHT: f32 = 16.0;
 const POST_HEIGHT: f32 = 30.0;
 
-pub fn girder_view(w: &mut Writer, v: &GirderView) {
-    let total = 12.0 + 30.0 + GIRDER_HEIGHT + POST_HEIGHT + 40.0;
-    w.ensure(total);
+/// The height a girder view takes on the page.
+pub const GIRDER_VIEW_HEIGHT: f32 = 12.0 + 30.0 + GIRDER_HEIGHT + POST_HEIGHT + 40.0;
+
+pub fn girder_view(w: &mut Writer, v: &GirderView, figure: usize) {
+    w.ensure(GIRDER_VIEW_HEIGHT);
     let top = w.y;
-    let title = fit(&v.title, 9.0, Face::Bold, w.content_width());
+    let title = fit(
+        &format!("Figure {figure}. {}", v.title),
+        9.0,
+        Face::Bold,
+        w.content_width(),
+    );
     w.text_at(MARGIN, top - 10.0, &title, 9.0, Face::Bold, INK);
     let load = fit(&v.load_text, 7.0, Face::Regular, w.content_width());
     w.text_at(MARGIN, top - 20.0, &load, 7.0, Face::Regular, MUTED);

@@ -1,41 +1,89 @@
-//! The report's parts laid out in order: cover, summary, one section per area (member table,
-//! findings with photos, side views), method appendix and the limits of the inspection.
+//! The report's front and back: the title block and the first page of actions, the contents,
+//! the facts of the inspection, the inspector's statement, the professional's notes, the
+//! method and the limits of the inspection.
 
-use super::draw::side_view;
 use super::fonts::{self, Face};
-use super::writer::{Writer, INK, MARGIN, MUTED};
-use crate::report::{AreaSection, FindingBlock, MemberRow, PhotoSlot, Report};
+use super::writer::{Writer, INK, LEADING, MARGIN, MUTED};
+use crate::report::{ActionItem, Figure, Report};
 
-const BODY: f32 = 9.5;
-const SMALL: f32 = 8.0;
-/// Width of the label column of a finding's facts.
-const LABEL_WIDTH: f32 = 104.0;
+pub const BODY: f32 = 8.5;
+pub const SMALL: f32 = 7.0;
+/// Width of a photo beside a first-page item.
+const THUMB: f32 = 92.0;
 
-/// A heading, kept on the page with at least a few lines of what follows it.
-fn heading(w: &mut Writer, text: &str, size: f32) {
-    w.ensure(size * 3.0 + 60.0);
-    w.space(size * 0.6);
+/// A heading, kept on the page with at least three lines of what follows it (a block that
+/// needs more room asks for it before its heading).
+pub fn heading(w: &mut Writer, text: &str, size: f32) {
+    w.ensure(size * 2.0 + 36.0);
+    w.space(size * 0.5);
     w.paragraph(text, size, Face::Bold, 0.0, INK);
-    w.space(size * 0.3);
+    w.space(size * 0.2);
 }
 
-pub fn cover(w: &mut Writer, r: &Report) {
-    w.space(60.0);
-    w.paragraph(&r.cover.title, 22.0, Face::Bold, 0.0, INK);
-    w.space(10.0);
-    w.paragraph(&r.cover.property, 16.0, Face::Regular, 0.0, INK);
-    w.space(24.0);
-    for (label, value) in &r.cover.facts {
-        w.labelled(label, value, 10.5, 130.0, 0.0);
-        w.space(3.0);
+/// The title block at the head of the first page.
+pub fn title_block(w: &mut Writer, r: &Report) {
+    let top = w.y;
+    let photo_w = if r.cover.photo.is_some() { 150.0 } else { 0.0 };
+    let width = w.content_width() - photo_w;
+    w.paragraph_within(&r.cover.title, 18.0, Face::Bold, 0.0, width, INK);
+    w.space(2.0);
+    w.paragraph_within(&r.cover.property, 13.0, Face::Regular, 0.0, width, INK);
+    w.space(2.0);
+    let fact = |label: &str| {
+        r.cover
+            .facts
+            .iter()
+            .find(|(l, _)| l == label)
+            .map(|(_, v)| v.as_str())
+            .unwrap_or("")
+    };
+    let line = [
+        ("for ", fact("Client")),
+        ("inspected ", fact("Date of inspection")),
+        ("by ", fact("Inspector")),
+    ]
+    .iter()
+    .filter(|(_, v)| !v.is_empty())
+    .map(|(k, v)| format!("{k}{v}"))
+    .chain(
+        r.cover
+            .facts
+            .iter()
+            .find(|(l, _)| l == "Code edition")
+            .map(|(_, v)| format!("held to the {}", v.split(',').next().unwrap_or(v))),
+    )
+    .collect::<Vec<_>>()
+    .join(", ");
+    w.paragraph_within(&capitalised(&line), BODY, Face::Regular, 0.0, width, MUTED);
+    if let Some(photo) = &r.cover.photo {
+        let x = MARGIN + w.content_width() - 140.0;
+        let h = super::cards::image_at(w, photo, x, top, 140.0, 90.0);
+        let label = super::writer::fit(&caption(photo), SMALL - 0.5, Face::Regular, 140.0);
+        w.text_at(
+            x,
+            top - h - SMALL * 1.1,
+            &label,
+            SMALL - 0.5,
+            Face::Regular,
+            MUTED,
+        );
+        w.y = w.y.min(top - h - SMALL * 1.6);
     }
-    w.space(28.0);
+    w.space(6.0);
     notice_box(w, &r.cover.notice);
 }
 
-fn notice_box(w: &mut Writer, text: &str) {
-    let lines = fonts::wrap(text, BODY, Face::Regular, w.content_width() - 24.0);
-    let h = lines.len() as f32 * BODY * 1.35 + 16.0;
+fn capitalised(text: &str) -> String {
+    let mut c = text.chars();
+    c.next()
+        .map(|f| f.to_uppercase().chain(c).collect())
+        .unwrap_or_default()
+}
+
+pub fn notice_box(w: &mut Writer, text: &str) {
+    let lines = fonts::wrap(text, SMALL + 0.5, Face::Regular, w.content_width() - 20.0);
+    let size = SMALL + 0.5;
+    let h = lines.len() as f32 * size * LEADING + 10.0;
     w.ensure(h + 4.0);
     let top = w.y;
     w.rect(
@@ -46,316 +94,318 @@ fn notice_box(w: &mut Writer, text: &str) {
         Some((0.95, 0.95, 0.93)),
         Some((0.55, 0.55, 0.5)),
     );
-    w.y = top - 8.0;
+    w.y = top - 5.0;
     for line in lines {
-        w.y -= BODY * 1.35;
+        w.y -= size * LEADING;
         w.text_at(
-            MARGIN + 12.0,
-            w.y + BODY * 0.25,
+            MARGIN + 10.0,
+            w.y + size * 0.25,
             &line,
-            BODY,
-            Face::Regular,
-            INK,
-        );
-    }
-    w.y = top - h - 6.0;
-}
-
-pub fn summary(w: &mut Writer, r: &Report) {
-    w.new_page();
-    heading(w, "Summary", 16.0);
-    w.paragraph(&r.summary.counts, BODY, Face::Regular, 0.0, MUTED);
-    if let Some(benchmark) = &r.summary.benchmark {
-        w.space(3.0);
-        w.paragraph(&format!("{benchmark}."), BODY, Face::Regular, 0.0, MUTED);
-    }
-    w.space(6.0);
-    for group in &r.summary.groups {
-        heading(w, &group.title, 12.0);
-        for line in &group.lines {
-            w.ensure(BODY * 3.0);
-            w.space(2.0);
-            let top = w.y;
-            w.y -= BODY * 1.35;
-            w.text_at(
-                MARGIN,
-                w.y + BODY * 0.25,
-                &line.use_text,
-                BODY,
-                Face::Bold,
-                INK,
-            );
-            w.y = top;
-            w.paragraph(&line.text, BODY, Face::Regular, 64.0, INK);
-            w.paragraph(&line.location, SMALL, Face::Regular, 64.0, MUTED);
-            w.space(3.0);
-        }
-    }
-    if r.summary.groups.is_empty() {
-        w.paragraph(
-            "Nothing measured is over or near a limit, and no condition was recorded for evaluation.",
-            BODY,
-            Face::Regular,
-            0.0,
-            INK,
-        );
-    }
-}
-
-pub fn area(w: &mut Writer, a: &AreaSection) {
-    w.new_page();
-    heading(w, &a.heading, 15.0);
-    w.paragraph(&a.about, BODY, Face::Regular, 0.0, MUTED);
-    if !a.notes.is_empty() {
-        w.paragraph(&a.notes, BODY, Face::Regular, 0.0, INK);
-    }
-    if !a.members.is_empty() {
-        heading(w, "Members", 11.0);
-        member_table(w, &a.members);
-    }
-    if !a.girders.is_empty() {
-        heading(w, "Girders and posts", 11.0);
-        for g in &a.girders {
-            super::girder_draw::girder_view(w, g);
-        }
-    }
-    if !a.views.is_empty() {
-        heading(w, "Side views", 11.0);
-        for v in &a.views {
-            side_view(w, v);
-        }
-    }
-    if !a.findings.is_empty() {
-        heading(w, "Findings", 11.0);
-        for f in &a.findings {
-            finding(w, f);
-        }
-    }
-    if !a.photos.is_empty() {
-        heading(w, "Photos", 11.0);
-        photos(w, &a.photos);
-    }
-}
-
-const COLUMNS: [(&str, f32); 8] = [
-    ("Member", 0.25),
-    ("Size", 0.11),
-    ("Species, grade", 0.19),
-    ("Spacing", 0.08),
-    ("Span", 0.09),
-    ("Allowable", 0.10),
-    ("Use", 0.07),
-    ("Governs", 0.11),
-];
-
-fn member_table(w: &mut Writer, rows: &[MemberRow]) {
-    let size = 7.5;
-    let header: Vec<String> = COLUMNS.iter().map(|c| c.0.to_string()).collect();
-    table_row(w, &header, size, Face::Bold, Some((0.9, 0.9, 0.88)));
-    for (n, r) in rows.iter().enumerate() {
-        let cells = vec![
-            r.member.clone(),
-            r.size.clone(),
-            r.species_grade.clone(),
-            r.spacing.clone(),
-            r.span.clone(),
-            r.allowable.clone(),
-            r.use_text.clone(),
-            r.governs.clone(),
-        ];
-        table_row(
-            w,
-            &cells,
             size,
             Face::Regular,
-            (n % 2 == 1).then_some((0.97, 0.97, 0.96)),
-        );
-    }
-    w.space(6.0);
-}
-
-fn table_row(
-    w: &mut Writer,
-    cells: &[String],
-    size: f32,
-    style: Face,
-    shade: Option<(f32, f32, f32)>,
-) {
-    let cw = w.content_width();
-    let wrapped: Vec<Vec<String>> = cells
-        .iter()
-        .zip(COLUMNS)
-        .map(|(c, (_, frac))| fonts::wrap(c, size, style, cw * frac - 6.0))
-        .collect();
-    let lines = wrapped.iter().map(Vec::len).max().unwrap_or(1).max(1);
-    let h = lines as f32 * size * 1.3 + 5.0;
-    w.ensure(h);
-    let top = w.y;
-    if let Some(s) = shade {
-        w.rect(MARGIN, top - h, cw, h, Some(s), None);
-    }
-    let mut x = MARGIN;
-    for (cell, (_, frac)) in wrapped.iter().zip(COLUMNS) {
-        for (k, line) in cell.iter().enumerate() {
-            w.text_at(
-                x + 3.0,
-                top - 3.0 - (k as f32 + 1.0) * size * 1.3 + size * 0.3,
-                line,
-                size,
-                style,
-                INK,
-            );
-        }
-        x += cw * frac;
-    }
-    w.y = top - h;
-}
-
-fn badge_colors(f: &FindingBlock) -> ((f32, f32, f32), (f32, f32, f32)) {
-    if f.over || f.badge.starts_with("TO BE") {
-        ((0.62, 0.1, 0.1), (1.0, 1.0, 1.0))
-    } else if f.badge.starts_with("near") || f.badge.starts_with("not fully") {
-        ((0.98, 0.8, 0.35), INK)
-    } else {
-        ((0.9, 0.9, 0.9), INK)
-    }
-}
-
-fn finding(w: &mut Writer, f: &FindingBlock) {
-    w.ensure(90.0);
-    w.space(6.0);
-    w.rule((0.8, 0.8, 0.8), 0.5);
-    w.space(4.0);
-    let (fill, text) = badge_colors(f);
-    let bw = fonts::width(&f.badge, 8.5, Face::Bold) + 10.0;
-    w.rect(MARGIN, w.y - 13.0, bw, 13.0, Some(fill), None);
-    w.text_at(MARGIN + 5.0, w.y - 9.5, &f.badge, 8.5, Face::Bold, text);
-    let title = format!("{}  ({})", f.title, f.rule_id);
-    w.text_at(
-        MARGIN + bw + 8.0,
-        w.y - 9.5,
-        &super::writer::fit(&title, 10.0, Face::Bold, w.content_width() - bw - 10.0),
-        10.0,
-        Face::Bold,
-        INK,
-    );
-    w.space(16.0);
-    w.paragraph(&f.location, SMALL, Face::Regular, 0.0, MUTED);
-    w.paragraph(&f.summary, BODY, Face::Regular, 0.0, INK);
-    w.space(2.0);
-    for (label, value) in &f.facts {
-        w.labelled(label, value, SMALL + 0.5, LABEL_WIDTH, 0.0);
-    }
-    for a in &f.assumptions {
-        w.paragraph(&format!("Assumes: {a}"), SMALL, Face::Regular, 0.0, MUTED);
-    }
-    for o in &f.options {
-        w.paragraph(
-            &format!("Option: {o}"),
-            SMALL + 0.5,
-            Face::Regular,
-            0.0,
             INK,
         );
     }
-    if let Some(reason) = &f.not_applicable {
-        w.labelled("Set aside", reason, BODY, LABEL_WIDTH, 0.0);
+    w.y = top - h - 4.0;
+}
+
+/// The first page: what must be done, by whom and how soon, then what could not be used.
+pub fn actions(w: &mut Writer, r: &Report) {
+    heading(w, "What needs to be done", 15.0);
+    w.paragraph(&r.actions.lead, BODY, Face::Regular, 0.0, INK);
+    for group in &r.actions.groups {
+        w.ensure(70.0);
+        w.space(8.0);
+        let top = w.y;
+        w.rect(
+            MARGIN,
+            top - 15.0,
+            w.content_width(),
+            15.0,
+            Some(band(&group.label)),
+            None,
+        );
+        w.text_at(
+            MARGIN + 6.0,
+            top - 11.0,
+            &group.label,
+            10.0,
+            Face::Bold,
+            INK,
+        );
+        w.y = top - 15.0;
+        w.space(2.0);
+        w.paragraph(&group.meaning, SMALL, Face::Regular, 0.0, MUTED);
+        let full = matches!(group.label.as_str(), "Engineer first" | "Contractor soon");
+        for item in &group.items {
+            if full || !item.photos.is_empty() {
+                action_item(w, item);
+            } else {
+                short_item(w, item);
+            }
+        }
     }
-    w.labelled("Recommendation", &f.recommendation, BODY, LABEL_WIDTH, 0.0);
-    if let Some(note) = &f.note {
-        w.labelled("Inspector's note", note, BODY, LABEL_WIDTH, 0.0);
+    if !r.actions.input_problems.is_empty() {
+        heading(w, "Entries that could not be used (to be corrected)", 11.0);
+        for p in &r.actions.input_problems {
+            w.ensure(BODY * 2.8);
+            w.paragraph(&p.text, BODY, Face::Regular, 0.0, INK);
+            w.paragraph(&p.location, SMALL, Face::Regular, 0.0, MUTED);
+            w.space(2.0);
+        }
     }
-    if !f.photos.is_empty() {
-        w.space(4.0);
-        photos(w, &f.photos);
+    if !r.actions.set_aside.is_empty() {
+        heading(w, "Set aside by the inspector", 11.0);
+        for p in &r.actions.set_aside {
+            w.ensure(BODY * 2.8);
+            w.paragraph(&p.text, BODY, Face::Regular, 0.0, INK);
+            w.paragraph(&p.location, SMALL, Face::Regular, 0.0, MUTED);
+            w.space(2.0);
+        }
     }
 }
 
-/// Photos two to a row, each with its caption under it.
-fn photos(w: &mut Writer, slots: &[PhotoSlot]) {
-    let gap = 12.0;
-    let pw = (w.content_width() - gap) / 2.0;
-    for pair in slots.chunks(2) {
-        let images: Vec<_> = pair
+/// A light band colour per priority, always with its words beside it.
+fn band(label: &str) -> (f32, f32, f32) {
+    match label {
+        "Engineer first" => (0.96, 0.78, 0.74),
+        "Contractor soon" => (0.98, 0.88, 0.68),
+        "Measure first" => (0.82, 0.88, 0.96),
+        _ => (0.88, 0.9, 0.86),
+    }
+}
+
+fn action_item(w: &mut Writer, item: &ActionItem) {
+    let number = format!("{}.", item.number);
+    let x = 22.0;
+    let photo_w = if item.photos.is_empty() {
+        0.0
+    } else {
+        THUMB + 10.0
+    };
+    let width = w.content_width() - x - photo_w;
+    let lines = fonts::wrap(&item.sentence, BODY, Face::Bold, width).len() + 3;
+    let photos_h = item.photos.len() as f32 * (THUMB * 0.75 + SMALL * 1.6);
+    w.ensure((lines as f32 * BODY * LEADING + 6.0).max(photos_h + 4.0));
+    w.space(4.0);
+    let top = w.y;
+    w.text_at(MARGIN, top - BODY * 1.05, &number, BODY, Face::Bold, INK);
+    w.paragraph_within(&item.sentence, BODY, Face::Bold, x, width, INK);
+    let mut facts = vec![item.location.clone(), item.basis.clone()];
+    if !item.also_at.is_empty() {
+        facts.push(format!("Also at {}", item.also_at.join("; ")));
+    }
+    let mut figures: Vec<usize> = item.photos.iter().map(|p| p.number).collect();
+    figures.extend(&item.drawings);
+    if !figures.is_empty() {
+        let list = figures
             .iter()
-            .map(|s| s.file.as_deref().and_then(|p| w.jpeg(p)))
-            .collect();
-        let heights: Vec<f32> = images
-            .iter()
-            .map(|i| {
-                i.as_ref()
-                    .map_or(pw * 0.5, |(_, iw, ih)| pw * *ih as f32 / *iw as f32)
-            })
-            .collect();
-        let captions: Vec<Vec<String>> = pair
-            .iter()
-            .map(|s| fonts::wrap(&s.caption, SMALL, Face::Regular, pw))
-            .collect();
-        let caption_h = captions.iter().map(Vec::len).max().unwrap_or(0) as f32 * SMALL * 1.3;
-        let row_h = heights
-            .iter()
-            .cloned()
-            .fold(0.0, f32::max)
-            .min(w.height * 0.55)
-            + caption_h
-            + 10.0;
-        w.ensure(row_h);
-        let top = w.y;
-        for (k, slot) in pair.iter().enumerate() {
-            let x = super::writer::MARGIN + k as f32 * (pw + gap);
-            let h = heights[k].min(w.height * 0.55);
-            let iw = if heights[k] > h {
-                pw * h / heights[k]
-            } else {
-                pw
-            };
-            match &images[k] {
-                Some((id, px_w, _)) => w.place_image(id.clone(), *px_w, x, top - h, iw),
-                None => {
-                    w.rect(
-                        x,
-                        top - h,
-                        pw,
-                        h,
-                        Some((0.95, 0.95, 0.95)),
-                        Some((0.6, 0.6, 0.6)),
-                    );
-                    let missing = if slot.file.is_some() {
-                        "photo file unreadable"
-                    } else {
-                        "photo not on this device"
-                    };
-                    w.text_at(x + 8.0, top - h / 2.0, missing, SMALL, Face::Regular, MUTED);
-                }
-            }
-            for (n, line) in captions[k].iter().enumerate() {
-                w.text_at(
-                    x,
-                    top - h - 4.0 - (n as f32 + 1.0) * SMALL * 1.3 + SMALL * 0.3,
-                    line,
-                    SMALL,
-                    Face::Regular,
-                    INK,
-                );
-            }
+            .map(usize::to_string)
+            .collect::<Vec<_>>()
+            .join(", ");
+        let word = if figures.len() == 1 {
+            "Figure"
+        } else {
+            "Figures"
+        };
+        facts.push(format!("{word} {list}"));
+    }
+    w.paragraph_within(&facts.join(". "), SMALL, Face::Regular, x, width, MUTED);
+    w.paragraph_within(
+        &format!("What to do: {}", item.what_to_do),
+        SMALL + 0.5,
+        Face::Regular,
+        x,
+        width,
+        INK,
+    );
+    if let Some(note) = &item.note {
+        w.paragraph_within(
+            &format!("Inspector's note: {note}"),
+            SMALL + 0.5,
+            Face::Regular,
+            x,
+            width,
+            INK,
+        );
+    }
+    for o in &item.options {
+        w.paragraph_within(
+            &format!("Repair option: {o}"),
+            SMALL,
+            Face::Regular,
+            x,
+            width,
+            INK,
+        );
+    }
+    // The finding's photos stacked at the right, each with its figure number.
+    let text_bottom = w.y;
+    let mut y = top;
+    let px = MARGIN + w.content_width() - THUMB;
+    for photo in &item.photos {
+        let h = super::cards::image_at(w, photo, px, y, THUMB, THUMB * 0.75);
+        let label = super::writer::fit(&caption(photo), SMALL - 0.5, Face::Regular, THUMB);
+        w.text_at(
+            px,
+            y - h - SMALL * 1.1,
+            &label,
+            SMALL - 0.5,
+            Face::Regular,
+            MUTED,
+        );
+        y -= h + SMALL * 1.6;
+    }
+    w.y = text_bottom.min(y);
+    w.space(1.0);
+}
+
+/// One line for a finding to measure or watch: number, sentence and where, in small type.
+fn short_item(w: &mut Writer, item: &ActionItem) {
+    let text = format!(
+        "{}. {} ({})",
+        item.number,
+        item.sentence.trim_end_matches('.'),
+        item.location
+    );
+    w.space(1.5);
+    w.paragraph(&text, SMALL, Face::Regular, 0.0, INK);
+}
+
+/// The contents, with the page each part starts on.
+pub fn contents(w: &mut Writer, entries: &[(String, usize)]) {
+    heading(w, "Contents", 12.0);
+    for (title, page) in entries {
+        w.ensure(BODY * 1.4);
+        w.y -= BODY * 1.4;
+        let page = page.to_string();
+        let pw = fonts::width(&page, BODY, Face::Regular);
+        let title = super::writer::fit(title, BODY, Face::Regular, w.content_width() - pw - 20.0);
+        w.text_at(MARGIN, w.y + 2.0, &title, BODY, Face::Regular, INK);
+        w.text_at(
+            MARGIN + w.content_width() - pw,
+            w.y + 2.0,
+            &page,
+            BODY,
+            Face::Regular,
+            INK,
+        );
+    }
+}
+
+/// The facts of the inspection and the counts of checks.
+pub fn about(w: &mut Writer, r: &Report) {
+    heading(w, "About this inspection", 12.0);
+    for (label, value) in &r.cover.facts {
+        w.labelled(label, value, BODY, 110.0, 0.0);
+        w.space(1.0);
+    }
+    w.space(4.0);
+    w.paragraph(&r.actions.counts, SMALL, Face::Regular, 0.0, MUTED);
+    if let Some(b) = &r.actions.benchmark {
+        w.space(2.0);
+        w.paragraph(&format!("{b}."), SMALL, Face::Regular, 0.0, MUTED);
+    }
+}
+
+/// The inspector's statement with a line to sign on.
+pub fn attestation(w: &mut Writer, r: &Report) {
+    let a = &r.attestation;
+    w.ensure(160.0);
+    heading(w, "Inspector's statement", 12.0);
+    w.paragraph(&a.statement, BODY, Face::Regular, 0.0, INK);
+    w.space(6.0);
+    for (label, value) in &a.lines {
+        let value = if value.trim().is_empty() {
+            "________________________"
+        } else {
+            value
+        };
+        w.labelled(label, value, BODY, 80.0, 0.0);
+    }
+    w.space(26.0);
+    let y = w.y;
+    w.line(&[(MARGIN, y), (MARGIN + 220.0, y)], INK, 0.6, None);
+    w.text_at(MARGIN, y - 10.0, "Signature", SMALL, Face::Regular, MUTED);
+    w.line(&[(MARGIN + 260.0, y), (MARGIN + 380.0, y)], INK, 0.6, None);
+    w.text_at(
+        MARGIN + 260.0,
+        y - 10.0,
+        "Date",
+        SMALL,
+        Face::Regular,
+        MUTED,
+    );
+    w.y = y - 16.0;
+}
+
+/// For the professional reader: each numbered finding's rule, citation and checks, then the
+/// assumptions, each once with the findings it is behind.
+pub fn professional(w: &mut Writer, r: &Report) {
+    heading(w, "For the professional: each finding's rule, citation, checks (with the use of each limit) and assumptions", 11.0);
+
+    let size = SMALL - 1.0;
+    // Findings resting on one check in one flowing paragraph; those with several checks
+    // each on their own lines.
+    let single = r
+        .professional
+        .iter()
+        .filter(|n| n.checks.is_empty())
+        .map(|n| format!("{}. {} ({})", n.number, n.rule_id, n.citation))
+        .collect::<Vec<_>>()
+        .join("; ");
+    if !single.is_empty() {
+        w.paragraph(&format!("{single}."), size, Face::Regular, 0.0, INK);
+        w.space(2.0);
+    }
+    for note in r.professional.iter().filter(|n| !n.checks.is_empty()) {
+        let line = format!(
+            "{}. {} ({}): {}",
+            note.number,
+            note.rule_id,
+            note.citation,
+            note.checks.join("; ")
+        );
+        w.paragraph(&line, size, Face::Regular, 0.0, INK);
+        w.space(1.0);
+    }
+    if !r.assumptions.is_empty() {
+        heading(w, "Assumptions", 10.0);
+        for (text, numbers) in &r.assumptions {
+            let list = numbers
+                .iter()
+                .map(usize::to_string)
+                .collect::<Vec<_>>()
+                .join(", ");
+            w.paragraph(&format!("{text} ({list})"), size, Face::Regular, 0.0, INK);
+            w.space(1.0);
         }
-        w.y = top - row_h;
     }
 }
 
 pub fn appendix(w: &mut Writer, r: &Report) {
-    w.new_page();
-    heading(w, "Appendix: method, loads, values and sources", 14.0);
     for section in &r.appendix {
         heading(w, &section.heading, 11.0);
         for p in &section.paragraphs {
-            w.paragraph(p, BODY, Face::Regular, 0.0, INK);
-            w.space(3.0);
+            w.paragraph(p, SMALL, Face::Regular, 0.0, INK);
+            w.space(2.0);
         }
     }
-    heading(w, &r.limits.heading, 14.0);
+}
+
+pub fn limits(w: &mut Writer, r: &Report) {
+    heading(w, &r.limits.heading, 12.0);
     for p in &r.limits.paragraphs {
-        w.paragraph(p, BODY, Face::Regular, 0.0, INK);
-        w.space(3.0);
+        w.paragraph(p, SMALL + 0.5, Face::Regular, 0.0, INK);
+        w.space(2.0);
+    }
+}
+
+/// A figure's caption: "Figure 3. Notch at the drain line".
+pub fn caption(f: &Figure) -> String {
+    match (f.number, f.caption.trim()) {
+        (0, c) => c.to_string(),
+        (n, "") => format!("Figure {n}"),
+        (n, c) => format!("Figure {n}. {c}"),
     }
 }

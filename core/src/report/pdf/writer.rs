@@ -6,9 +6,11 @@ use printpdf::*;
 use std::collections::HashMap;
 use std::path::{Path, PathBuf};
 
-pub const MARGIN: f32 = 50.0;
-const HEAD_SPACE: f32 = 28.0;
-const FOOT_SPACE: f32 = 30.0;
+pub const MARGIN: f32 = 40.0;
+/// Line height as a multiple of the type size.
+pub const LEADING: f32 = 1.2;
+const HEAD_SPACE: f32 = 20.0;
+const FOOT_SPACE: f32 = 16.0;
 
 pub fn rgb(r: f32, g: f32, b: f32) -> Color {
     Color::Rgb(Rgb {
@@ -73,6 +75,24 @@ impl Writer {
         self.y = self.height - MARGIN - HEAD_SPACE;
     }
 
+    /// The number of the page being written, from 1.
+    pub fn page_number(&self) -> usize {
+        self.pages.len() + 1
+    }
+
+    /// Title, author, subject and the real creation time in the PDF's own metadata.
+    pub fn set_meta(&mut self, meta: &crate::report::Meta, created: DateTime) {
+        let info = &mut self.doc.metadata.info;
+        info.document_title = meta.title.clone();
+        info.author = meta.author.clone();
+        info.subject = meta.subject.clone();
+        info.creator = "Undercroft".into();
+        info.producer = format!("Undercroft {}", env!("CARGO_PKG_VERSION"));
+        info.creation_date = created;
+        info.modification_date = created;
+        info.metadata_date = created;
+    }
+
     /// True when the current page has nothing on it yet.
     pub fn page_is_empty(&self) -> bool {
         self.ops.is_empty()
@@ -134,8 +154,22 @@ impl Writer {
         indent: f32,
         color: (f32, f32, f32),
     ) {
-        let leading = size * 1.35;
-        let lines = fonts::wrap(text, size, style, self.content_width() - indent);
+        let width = self.content_width() - indent;
+        self.paragraph_within(text, size, style, indent, width, color);
+    }
+
+    /// A paragraph wrapped to `width` points from `indent`.
+    pub fn paragraph_within(
+        &mut self,
+        text: &str,
+        size: f32,
+        style: Face,
+        indent: f32,
+        width: f32,
+        color: (f32, f32, f32),
+    ) {
+        let leading = size * LEADING;
+        let lines = fonts::wrap(text, size, style, width);
         for line in lines {
             self.ensure(leading);
             self.y -= leading;
@@ -152,7 +186,7 @@ impl Writer {
 
     /// "Label: value" with the label bold, value wrapped beside it.
     pub fn labelled(&mut self, label: &str, value: &str, size: f32, label_width: f32, indent: f32) {
-        let leading = size * 1.35;
+        let leading = size * LEADING;
         let lines = fonts::wrap(
             value,
             size,
@@ -181,17 +215,6 @@ impl Writer {
                 INK,
             );
         }
-    }
-
-    /// A horizontal rule across the content width at the cursor.
-    pub fn rule(&mut self, color: (f32, f32, f32), thickness: f32) {
-        let y = self.y;
-        self.line(
-            &[(MARGIN, y), (self.width - MARGIN, y)],
-            color,
-            thickness,
-            None,
-        );
     }
 
     pub fn line(
