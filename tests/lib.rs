@@ -28,3 +28,38 @@ pub fn csv_fields(line: &str) -> Vec<String> {
     }
     fields
 }
+
+/// The demo's drawn photos, read from `demo-data/photos`, by photo id.
+pub fn demo_images(
+    inspection: &undercroft_core::Inspection,
+) -> std::collections::HashMap<String, Vec<u8>> {
+    let base = repo_root().join("demo-data");
+    inspection
+        .photos
+        .iter()
+        .map(|p| {
+            let bytes = std::fs::read(base.join(&p.file))
+                .unwrap_or_else(|e| panic!("demo photo {}: {e}", p.file));
+            (p.id.clone(), bytes)
+        })
+        .collect()
+}
+
+/// Runs a command-line reader of PDFs (poppler-utils, qpdf) and returns what it prints.
+pub fn tool(name: &str, args: &[&std::ffi::OsStr]) -> String {
+    let out = std::process::Command::new(name)
+        .args(args)
+        .output()
+        .unwrap_or_else(|e| panic!("{name} is needed (Debian: poppler-utils, qpdf): {e}"));
+    assert!(
+        out.status.success(),
+        "{name} failed: {}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    String::from_utf8_lossy(&out.stdout).into_owned()
+}
+
+/// Text with every run of white space made one space.
+pub fn normalise(text: &str) -> String {
+    text.split_whitespace().collect::<Vec<_>>().join(" ")
+}

@@ -9,6 +9,38 @@ use undercroft_core::store::{ListFilter, Store};
 /// The invented demo inspection shipped with the app.
 pub const DEMO_INSPECTION: &str = include_str!("../../demo-data/demo-inspection.json");
 
+/// The demo's drawn photos, by the file name the inspection gives them.
+const DEMO_PHOTOS: [(&str, &[u8]); 7] = [
+    (
+        "photos/house-front.jpg",
+        include_bytes!("../../demo-data/photos/house-front.jpg"),
+    ),
+    (
+        "photos/decay-at-joist-end.jpg",
+        include_bytes!("../../demo-data/photos/decay-at-joist-end.jpg"),
+    ),
+    (
+        "photos/notch-at-drain.jpg",
+        include_bytes!("../../demo-data/photos/notch-at-drain.jpg"),
+    ),
+    (
+        "photos/cut-i-joist-flange.jpg",
+        include_bytes!("../../demo-data/photos/cut-i-joist-flange.jpg"),
+    ),
+    (
+        "photos/joist-cut-for-duct.jpg",
+        include_bytes!("../../demo-data/photos/joist-cut-for-duct.jpg"),
+    ),
+    (
+        "photos/shimmed-post.jpg",
+        include_bytes!("../../demo-data/photos/shimmed-post.jpg"),
+    ),
+    (
+        "photos/torn-ground-cover.jpg",
+        include_bytes!("../../demo-data/photos/torn-ground-cover.jpg"),
+    ),
+];
+
 /// Opens (or creates) the store at `db`; when `with_demo` is set and the store holds no
 /// inspection yet, puts the demo inspection in it.
 pub fn prepare_store(db: &Path, with_demo: bool) -> Result<(), String> {
@@ -28,9 +60,22 @@ pub fn prepare_store(db: &Path, with_demo: bool) -> Result<(), String> {
     if empty {
         let demo = undercroft_core::interchange::from_json(DEMO_INSPECTION)
             .map_err(|e| format!("the demo inspection does not read: {e}"))?;
-        store
-            .import_inspection(&demo)
+        let images = demo
+            .photos
+            .iter()
+            .filter_map(|p| {
+                DEMO_PHOTOS
+                    .iter()
+                    .find(|(file, _)| *file == p.file)
+                    .map(|(_, bytes)| (p.id.clone(), bytes.to_vec()))
+            })
+            .collect();
+        let (_, refused) = store
+            .import_inspection_with_images(&demo, &images)
             .map_err(|e| format!("the demo inspection was not stored: {e}"))?;
+        if let Some((id, e)) = refused.first() {
+            return Err(format!("the demo photo {id} was not stored: {e}"));
+        }
     }
     Ok(())
 }
@@ -66,4 +111,27 @@ pub struct StorePath(pub String);
 pub fn root_from_context() -> Element {
     let db = use_context::<StorePath>().0;
     rsx! { Root { db } }
+}
+
+#[cfg(test)]
+mod tests {
+    #[test]
+    fn the_demo_comes_with_its_photos() {
+        let dir = std::env::temp_dir().join(format!("undercroft-demo-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        let db = dir.join("store.sqlite");
+        super::prepare_store(&db, true).unwrap();
+        let store = undercroft_core::store::Store::open(&db).unwrap();
+        let demo = undercroft_core::interchange::from_json(super::DEMO_INSPECTION).unwrap();
+        let photos = store.photos_of_inspection(&demo.id).unwrap();
+        assert_eq!(photos.len(), super::DEMO_PHOTOS.len());
+        assert!(photos
+            .iter()
+            .all(|p| p.report_path.as_ref().is_some_and(|f| f.exists())));
+        // Each photo keeps its owner and caption.
+        assert!(photos
+            .iter()
+            .any(|p| p.attached_to == "obs-family-decay" && p.caption.starts_with("Decay")));
+        std::fs::remove_dir_all(&dir).ok();
+    }
 }

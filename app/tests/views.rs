@@ -22,18 +22,24 @@ fn TestRoot() -> Element {
     rsx! { App {} }
 }
 
+fn demo() -> undercroft_core::Inspection {
+    undercroft_core::interchange::from_json(include_str!("../../demo-data/demo-inspection.json"))
+        .unwrap()
+}
+
 /// The HTML of the screen at `path`, with the demo inspection in a fresh store.
 fn render(path: &str) -> String {
+    render_with(path, &demo())
+}
+
+/// The HTML of the screen at `path`, with the given inspection in a fresh store.
+fn render_with(path: &str, demo: &undercroft_core::Inspection) -> String {
     static RENDERS: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
     let n = RENDERS.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
     let dir = std::env::temp_dir().join(format!("undercroft-app-views-{}-{n}", std::process::id()));
     std::fs::create_dir_all(&dir).unwrap();
     let db = dir.join("store.sqlite");
-    let demo = undercroft_core::interchange::from_json(include_str!(
-        "../../demo-data/demo-inspection.json"
-    ))
-    .unwrap();
-    Store::open(&db).unwrap().import_inspection(&demo).unwrap();
+    Store::open(&db).unwrap().import_inspection(demo).unwrap();
     SETUP.with(|s| *s.borrow_mut() = (db, path.to_string()));
     let mut dom = VirtualDom::new(TestRoot);
     dom.rebuild_in_place();
@@ -112,6 +118,29 @@ fn findings_over_limit_first_with_citations() {
     assert!(html.contains("Basis: observed condition"));
     assert!(html.contains("IRC 2018 R502.8.1"));
     assert!(html.contains("licensed professional"));
+    // Who acts, as the report says it, and the choice to change it.
+    assert!(html.contains("Who acts: Engineer first"), "{html}");
+    assert!(html.contains("Who acts: Contractor soon"));
+    assert!(
+        !html.contains("input-problems"),
+        "the demo has no bad entry"
+    );
+}
+
+#[test]
+fn findings_list_entries_that_could_not_be_used() {
+    let mut inspection = demo();
+    // A spacing of 96 in cannot be what was meant: refused, said, never "not entered".
+    inspection.areas[0].runs[1].framing.spacing =
+        Some(undercroft_core::units::Length::inches(96.0));
+    let page = render_with(&format!("/inspection/{DEMO}/findings"), &inspection);
+    let html = &page[page.find("<main").expect("the screen")..];
+    let problems = &html[html.find("input-problems").expect("the problems card")..];
+    assert!(
+        problems.contains("spacing 96 in is outside 4 to 48 in"),
+        "{problems}"
+    );
+    assert!(html.contains("spacing entered but out of range"), "{html}");
 }
 
 // Source: IRC 2018 R502.8.1: the demo's 2 in notch in a 2x10 (limit d/6 = 1.542 in, held as

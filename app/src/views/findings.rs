@@ -5,6 +5,7 @@
 use crate::components::StatusBadge;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
+use undercroft_core::priority::{default_priority, effective_priority, Priority};
 use undercroft_core::store::FindingNote;
 
 /// One finding as the screen shows it.
@@ -22,6 +23,10 @@ struct Row {
     recommendation: String,
     location: String,
     note: FindingNote,
+    /// Who acts and how soon, as the report will say it.
+    priority: Priority,
+    /// The priority set from the finding, before the inspector changes it.
+    default_priority: Priority,
 }
 
 #[component]
@@ -77,6 +82,8 @@ pub fn Findings(id: String) -> Element {
                     .clone()
                     .unwrap_or_else(|| f.recommendation()),
                 location: f.place.location.to_string(),
+                priority: effective_priority(f, note.priority),
+                default_priority: default_priority(f),
                 note,
             }
         })
@@ -85,6 +92,17 @@ pub fn Findings(id: String) -> Element {
         main {
             nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
             h1 { "Findings" }
+            if !evaluation.problems.is_empty() {
+                div { class: "card", id: "input-problems",
+                    h2 { "Entries that could not be used" }
+                    p { class: "muted", "Correct these: the findings that need them say so, and the report lists them." }
+                    ul {
+                        for p in evaluation.problems.iter() {
+                            li { strong { "{p.location}: " } "{p.message}" }
+                        }
+                    }
+                }
+            }
             for row in rows {
                 FindingCard { key: "{row.key}", inspection_id: id.clone(), row }
             }
@@ -103,6 +121,7 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
         match edit.0 {
             "note" => n.note = value,
             "recommendation" => n.recommendation = (!value.trim().is_empty()).then_some(value),
+            "priority" => n.priority = Priority::parse(&value),
             _ => n.not_applicable_reason = (!value.trim().is_empty()).then_some(value),
         }
         let _ = app.change(|s| s.set_finding_note(&inspection_id, &n));
@@ -120,11 +139,19 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
             p { "{row.measured}" }
             p { class: "muted", "Basis: {row.basis}. Cites {row.citation}" }
             p { "{row.recommendation}" }
+            p { class: "muted priority", "Who acts: {row.priority.label()}" }
             if !row.note.note.is_empty() {
                 p { "Note: {row.note.note}" }
             }
             button { class: "quiet", onclick: move |_| open.toggle(), if open() { "Close" } else { "Note, recommendation, set aside" } }
             if open() {
+                label { r#for: "priority-{row.key}", "Who acts and how soon" }
+                select { id: "priority-{row.key}", onchange: move |e| save.call(("priority", e.value())),
+                    option { value: "", selected: row.note.priority.is_none(), "As set from the finding ({row.default_priority.label()})" }
+                    for p in Priority::ALL {
+                        option { value: "{p.key()}", selected: row.note.priority == Some(p), "{p.label()}: {p.meaning()}" }
+                    }
+                }
                 label { "Your note" }
                 textarea { value: "{row.note.note}", oninput: move |e| save.call(("note", e.value())) }
                 label { "Your recommendation (leave empty for the computed one)" }

@@ -175,6 +175,7 @@ pub struct Numbered<'a> {
     pub photos: Vec<Figure>,
     pub drawings: Vec<usize>,
     pub what_to_do: String,
+    pub noted_on_site: Option<String>,
     pub note: Option<String>,
     pub options: Vec<String>,
     pub also_at: Vec<String>,
@@ -255,6 +256,7 @@ fn number_group<'a>(
     if let Some(seen) = seen {
         detail = format!("{detail}. Noted on site: {seen}");
     }
+    let noted_on_site = seen.map(str::to_string);
     let row = NotedRow {
         number,
         status: status_words(f.basis, f.status).to_string(),
@@ -282,6 +284,7 @@ fn number_group<'a>(
                     text.replace("; options to discuss are listed.", ".")
                 }
             }),
+        noted_on_site,
         note: note.map(|n| n.note.clone()).filter(|n| !n.is_empty()),
         options,
         also_at,

@@ -196,6 +196,7 @@ fn actions(
                     basis: n.basis.clone(),
                     also_at: n.also_at.clone(),
                     what_to_do: n.what_to_do.clone(),
+                    noted_on_site: n.noted_on_site.clone(),
                     note: n.note.clone(),
                     options: n.options.clone(),
                     photos: n.photos.clone(),

@@ -108,6 +108,8 @@ pub struct ActionItem {
     /// Where else the same finding was made, for a finding of several joists or posts.
     pub also_at: Vec<String>,
     pub what_to_do: String,
+    /// What the inspector wrote on the observation when it was made.
+    pub noted_on_site: Option<String>,
     pub note: Option<String>,
     /// Computed repair options, only when the inspector turned them on.
     pub options: Vec<String>,

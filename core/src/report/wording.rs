@@ -94,6 +94,25 @@ pub fn sentence(g: &Group) -> String {
                     .unwrap_or("a value is missing")
             )
         ),
+        (Status::OverLimit, None) => match f.governing_check() {
+            // A yes/no limit: what was seen against what is asked for (what was seen only
+            // where the summary does not say it already).
+            Some(c) if c.not_checked_because.is_none() => {
+                let summary = f.summary();
+                let seen = c.measured_shown().text;
+                let asks = if summary.contains(seen.as_str()) {
+                    format!("{} asks for", source_word(f.basis))
+                } else {
+                    format!("{seen} found where {} asks for", source_word(f.basis))
+                };
+                format!(
+                    "{}; {asks} {}",
+                    decapital(bare(&summary)),
+                    c.limit_shown().text
+                )
+            }
+            _ => decapital(bare(&f.summary())),
+        },
         _ => decapital(bare(&f.summary())),
     };
     format!("{head}: {body}.")

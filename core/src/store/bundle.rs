@@ -96,6 +96,40 @@ impl Store {
         self.replace(inspection, &[])
     }
 
+    /// Imports an inspection file together with the images of its photos (by photo id), each
+    /// put through the same import as a photo taken in the app. A photo whose image is not
+    /// given stays a reference without an image; one whose image is refused is said in the
+    /// returned list and kept as a reference, and nothing else is lost.
+    pub fn import_inspection_with_images(
+        &mut self,
+        inspection: &Inspection,
+        images: &std::collections::HashMap<String, Vec<u8>>,
+    ) -> Result<(ImportOutcome, Vec<(String, StoreError)>)> {
+        let mut bare = inspection.clone();
+        bare.photos.retain(|p| !images.contains_key(&p.id));
+        let mut outcome = self.replace(&bare, &[])?;
+        let mut refused = Vec::new();
+        for p in inspection
+            .photos
+            .iter()
+            .filter(|p| images.contains_key(&p.id))
+        {
+            match self.add_photo(&p.attached_to, &images[&p.id], &p.caption) {
+                Ok(_) => outcome.photos += 1,
+                Err(e) => {
+                    refused.push((p.id.clone(), e));
+                    // Kept as a reference without an image, after the others.
+                    let position = 1_000_000 + refused.len() as i64;
+                    self.edit(&inspection.id, |tx| {
+                        save::insert_photo_ref(tx, &inspection.id, position, p, &now_utc())
+                    })?;
+                    outcome.photos += 1;
+                }
+            }
+        }
+        Ok((outcome, refused))
+    }
+
     /// The inspection as an interchange value (the same as `load_inspection`).
     pub fn export_inspection(&self, id: &str) -> Result<Inspection> {
         self.load_inspection(id)

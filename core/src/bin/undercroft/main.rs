@@ -2,6 +2,7 @@
 //! inspection file.
 
 mod check_cmd;
+mod photo_files;
 mod report_cmd;
 mod rules_cmd;
 mod span_cmd;

@@ -3,7 +3,7 @@
 
 use anyhow::{bail, Context};
 use clap::Args;
-use std::path::{Component, Path, PathBuf};
+use std::path::{Path, PathBuf};
 use undercroft_core::evaluate;
 use undercroft_core::interchange::from_json_bytes;
 use undercroft_core::model::Inspection;
@@ -50,10 +50,7 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
                 .with_context(|| format!("{} is not a usable inspection file", file.display()))?;
             let base = match &args.photos {
                 Some(folder) => folder.clone(),
-                None => match file.parent() {
-                    Some(p) if !p.as_os_str().is_empty() => p.to_path_buf(),
-                    _ => PathBuf::from("."),
-                },
+                None => crate::photo_files::folder_of(file),
             };
             let files = photos_in_folder(&inspection, &base, &scratch.0);
             (inspection, files, Vec::new())
@@ -135,42 +132,24 @@ impl Drop for Scratch {
     }
 }
 
-/// The photos an inspection file names, found only inside `base` (no absolute paths, no
-/// `..`, no link out of it) and put through the same import as any photo (upright, resized,
-/// no metadata) into `scratch`. A photo that cannot be used is said on stderr and shows as a
-/// blank in the report.
+/// The photos an inspection file names, found only inside `base` and put through the same
+/// import as any photo (upright, resized, no metadata) into `scratch`. A photo that cannot
+/// be used is said on stderr and shows as a blank in the report.
 fn photos_in_folder(inspection: &Inspection, base: &Path, scratch: &Path) -> PhotoFiles {
     let mut files = PhotoFiles::new();
-    let root = base.canonicalize().ok();
+    let read =
+        crate::photo_files::read_all(inspection, base, "the report shows a blank in its place");
     for (n, p) in inspection.photos.iter().enumerate() {
+        let Some(bytes) = read.get(&p.id) else {
+            continue;
+        };
         let refuse = |why: String| {
             eprintln!(
                 "warning: photo {} ({}): {why}; the report shows a blank in its place",
                 p.id, p.file
             )
         };
-        let rel = Path::new(&p.file);
-        if rel.is_absolute() || rel.components().any(|c| !matches!(c, Component::Normal(_))) {
-            refuse(format!("is not inside {}", base.display()));
-            continue;
-        }
-        let path = base.join(rel);
-        let inside = match (&root, path.canonicalize()) {
-            (Some(root), Ok(real)) => real.starts_with(root),
-            (_, Err(e)) => {
-                refuse(format!("cannot be read ({e})"));
-                continue;
-            }
-            (None, _) => false,
-        };
-        if !inside {
-            refuse(format!("leads outside {}", base.display()));
-            continue;
-        }
-        let processed =
-            crate::store_cmd::read_capped(&path, undercroft_core::photo::MAX_FILE_BYTES, "a photo")
-                .and_then(|bytes| Ok(undercroft_core::photo::process(&bytes)?));
-        match processed {
+        match undercroft_core::photo::process(bytes) {
             Ok(photo) => {
                 let out = scratch.join(format!("{n}.jpg"));
                 match std::fs::write(&out, &photo.report_jpeg) {

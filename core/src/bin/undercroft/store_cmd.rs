@@ -154,7 +154,17 @@ pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
         if args.as_copy {
             store.import_inspection_copy(&inspection)?
         } else {
-            store.import_inspection(&inspection)?
+            // The photo files beside the inspection file come in with it.
+            let images = crate::photo_files::read_all(
+                &inspection,
+                &crate::photo_files::folder_of(&args.file),
+                "imported without its image",
+            );
+            let (outcome, refused) = store.import_inspection_with_images(&inspection, &images)?;
+            for (id, e) in refused {
+                eprintln!("warning: photo {id}: {e}; imported without its image");
+            }
+            outcome
         }
     };
     let verb = if outcome.replaced {
@@ -163,8 +173,10 @@ pub fn import(args: &ImportArgs, db: Option<&Path>) -> anyhow::Result<()> {
         "imported"
     };
     println!(
-        "{verb} {} ({} photos)",
-        outcome.inspection_id, outcome.photos
+        "{verb} {} ({} photo{})",
+        outcome.inspection_id,
+        outcome.photos,
+        if outcome.photos == 1 { "" } else { "s" }
     );
     Ok(())
 }

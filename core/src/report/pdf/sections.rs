@@ -195,22 +195,33 @@ fn action_item(w: &mut Writer, item: &ActionItem) {
     if !item.also_at.is_empty() {
         facts.push(format!("Also at {}", item.also_at.join("; ")));
     }
-    let mut figures: Vec<usize> = item.photos.iter().map(|p| p.number).collect();
-    figures.extend(&item.drawings);
-    if !figures.is_empty() {
-        let list = figures
+    if !item.drawings.is_empty() {
+        let list = item
+            .drawings
             .iter()
             .map(usize::to_string)
             .collect::<Vec<_>>()
             .join(", ");
-        let word = if figures.len() == 1 {
-            "Figure"
+        let word = if item.drawings.len() == 1 {
+            "Drawing: Figure"
         } else {
-            "Figures"
+            "Drawings: Figures"
         };
         facts.push(format!("{word} {list}"));
     }
+    // Each photo's caption in full here; the thumbnail carries its number.
+    facts.extend(item.photos.iter().map(caption));
     w.paragraph_within(&facts.join(". "), SMALL, Face::Regular, x, width, MUTED);
+    if let Some(seen) = &item.noted_on_site {
+        w.paragraph_within(
+            &format!("Noted on site: {seen}"),
+            SMALL + 0.5,
+            Face::Regular,
+            x,
+            width,
+            INK,
+        );
+    }
     w.paragraph_within(
         &format!("What to do: {}", item.what_to_do),
         SMALL + 0.5,
@@ -245,7 +256,7 @@ fn action_item(w: &mut Writer, item: &ActionItem) {
     let px = MARGIN + w.content_width() - THUMB;
     for photo in &item.photos {
         let h = super::cards::image_at(w, photo, px, y, THUMB, THUMB * 0.75);
-        let label = super::writer::fit(&caption(photo), SMALL - 0.5, Face::Regular, THUMB);
+        let label = format!("Figure {}", photo.number);
         w.text_at(
             px,
             y - h - SMALL * 1.1,
