@@ -45,25 +45,30 @@ fn bare(text: &str) -> &str {
 pub fn sentence(g: &Group) -> String {
     let f = g.worst();
     let head = match g.count_text() {
-        Some(count) => format!("{} at {count}", f.title()),
+        Some(count) => format!("{} at {count}, worst", f.title()),
         None => f.title().to_string(),
     };
-    let worst = if g.findings.len() > 1 { "worst " } else { "" };
     let body = match (f.status, numbers(f)) {
+        // A span is read with the joist it is about: size, species, grade and spacing.
+        (Status::OverLimit | Status::NearLimit, Some(_))
+            if matches!(f.rule_id(), "joist-span" | "deck-joist-span") =>
+        {
+            format!("{}", bare(&f.summary()))
+        }
         (Status::OverLimit, Some((c, m, l))) => match c.bound {
             Bound::AtMost => format!(
-                "{worst}{} is {m}, where {} allows at most {l}",
+                "{} is {m}, where {} allows at most {l}",
                 c.what,
                 source_word(f.basis)
             ),
             Bound::AtLeast => format!(
-                "{worst}{} is {m}, where {} asks for at least {l}",
+                "{} is {m}, where {} asks for at least {l}",
                 c.what,
                 source_word(f.basis)
             ),
         },
         (Status::NearLimit, Some((c, m, l))) if m == l => format!(
-            "{worst}{} is {m}, exactly the {} allowed",
+            "{} is {m}, exactly the {} allowed",
             c.what,
             match c.bound {
                 Bound::AtMost => "largest",
@@ -71,7 +76,7 @@ pub fn sentence(g: &Group) -> String {
             }
         ),
         (Status::NearLimit, Some((c, m, l))) => format!(
-            "{worst}{} is {m}, close to the {} of {l}",
+            "{} is {m}, close to the {} of {l}",
             c.what,
             match c.bound {
                 Bound::AtMost => "largest allowed",

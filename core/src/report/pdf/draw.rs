@@ -8,8 +8,8 @@ use crate::report::SideView;
 const OVER: (f32, f32, f32) = (0.62, 0.1, 0.1);
 const DEFECT: (f32, f32, f32) = (0.2, 0.35, 0.6);
 const WOOD: (f32, f32, f32) = (0.93, 0.87, 0.74);
-const JOIST_HEIGHT: f32 = 36.0;
-const SAG_HEIGHT: f32 = 28.0;
+const JOIST_HEIGHT: f32 = 30.0;
+const SAG_HEIGHT: f32 = 22.0;
 
 /// The height a side view takes on the page.
 pub fn side_view_height(v: &SideView) -> f32 {

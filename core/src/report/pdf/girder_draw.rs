@@ -10,7 +10,7 @@ const OVER: (f32, f32, f32) = (0.62, 0.1, 0.1);
 const WOOD: (f32, f32, f32) = (0.93, 0.87, 0.74);
 const SUPPORT: (f32, f32, f32) = (0.55, 0.55, 0.55);
 const GIRDER_HEIGHT: f32 = 16.0;
-const POST_HEIGHT: f32 = 30.0;
+const POST_HEIGHT: f32 = 24.0;
 
 /// The height a girder view takes on the page.
 pub const GIRDER_VIEW_HEIGHT: f32 = 12.0 + 30.0 + GIRDER_HEIGHT + POST_HEIGHT + 40.0;

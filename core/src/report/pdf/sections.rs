@@ -307,7 +307,20 @@ pub fn contents(w: &mut Writer, entries: &[(String, usize)]) {
 /// The facts of the inspection and the counts of checks.
 pub fn about(w: &mut Writer, r: &Report) {
     heading(w, "About this inspection", 12.0);
-    for (label, value) in &r.cover.facts {
+    // Client, inspector and date are on the first page and in the statement.
+    let said_elsewhere = [
+        "Client",
+        "Inspector",
+        "Company",
+        "License",
+        "Date of inspection",
+    ];
+    for (label, value) in r
+        .cover
+        .facts
+        .iter()
+        .filter(|(l, _)| !said_elsewhere.contains(&l.as_str()))
+    {
         w.labelled(label, value, BODY, 110.0, 0.0);
         w.space(1.0);
     }
@@ -353,7 +366,11 @@ pub fn attestation(w: &mut Writer, r: &Report) {
 /// For the professional reader: each numbered finding's rule, citation and checks, then the
 /// assumptions, each once with the findings it is behind.
 pub fn professional(w: &mut Writer, r: &Report) {
-    heading(w, "For the professional: each finding's rule, citation, checks (with the use of each limit) and assumptions", 11.0);
+    heading(
+        w,
+        "For the professional: rules, checks and assumptions",
+        11.0,
+    );
 
     let size = SMALL - 1.0;
     // Findings resting on one check in one flowing paragraph; those with several checks
