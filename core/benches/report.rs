@@ -17,15 +17,18 @@ use undercroft_core::{evaluate, Inspection};
 
 const INSPECTION: &str = "bench-report";
 
-/// One run of 40 joists, each with a notch: about 40 findings to photograph.
+/// 40 runs of one joist each with a notch: 40 findings that do not group, each to photograph.
 fn inspection(joists: usize) -> Inspection {
     let mut i = from_json(&format!(
         r#"{{"format":"undercroft-inspection","version":1,"id":"{INSPECTION}","property":{{"address":"12 Bench Street"}},"date":"2026-12-01",
         "areas":[{{"id":"a","name":"Crawlspace","runs":[{{"id":"r","label":"Run","framing":{{"species":"spf","grade":"no2","size":"2x10","spacing":16,"clear_span":180,"bearing":{{"length":3,"on":"concrete"}},"end_restraint":"rim-joist"}}}}]}}]}}"#
     ))
     .unwrap();
-    let run = &mut i.areas[0].runs[0];
+    let template = i.areas[0].runs.remove(0);
     for n in 0..joists {
+        let mut run = template.clone();
+        run.id = format!("r{n}");
+        run.label = format!("Run {}", n + 1);
         let notch = ObservationKind::Notch {
             edge: Edge::Bottom,
             depth: Length::inches(1.0 + (n % 5) as f64 * 0.25),
@@ -44,6 +47,7 @@ fn inspection(joists: usize) -> Inspection {
                 note: String::new(),
             }],
         });
+        i.areas[0].runs.push(run);
     }
     i
 }

@@ -1,6 +1,6 @@
 //! The PDF printer: renders a `Report` value with printpdf, nothing more. Photos are embedded
-//! as their stored JPEG bytes (DCTDecode), never decoded or re-encoded. The pages are laid out
-//! twice: the first pass finds the page each part starts on, for the contents.
+//! as their stored JPEG bytes (DCTDecode), never decoded or re-encoded. The contents' page
+//! numbers are written in once every part is placed.
 
 mod cards;
 mod draw;
@@ -23,8 +23,7 @@ pub fn render(report: &Report) -> Vec<u8> {
 
 /// The report as PDF bytes with the given creation time (seconds since 1970, UTC).
 pub fn render_at(report: &Report, created_unix: i64) -> Vec<u8> {
-    let (_, pages) = lay_out(report, None);
-    let (mut w, _) = lay_out(report, Some(&pages));
+    let mut w = lay_out(report);
     w.set_meta(
         &report.meta,
         DateTime::from_unix_timestamp(created_unix).unwrap_or_else(|_| DateTime::now_utc()),
@@ -32,44 +31,37 @@ pub fn render_at(report: &Report, created_unix: i64) -> Vec<u8> {
     w.finish(&report.running_head)
 }
 
-/// Every part of the report in order; returns the writer and the contents (title, page).
-fn lay_out(
-    report: &Report,
-    contents: Option<&[(String, usize)]>,
-) -> (writer::Writer, Vec<(String, usize)>) {
+/// Every part of the report in order, the contents' page numbers filled in at the end.
+fn lay_out(report: &Report) -> writer::Writer {
     let (width, height) = report.paper.size_pt();
     let mut w = writer::Writer::new(&report.meta.title, width, height);
-    let mut found = Vec::new();
+    let mut pages = Vec::new();
     sections::title_block(&mut w, report);
     sections::actions(&mut w, report);
-    // The contents has as many lines in both passes; the first pass fills in zeros.
-    let entries: Vec<(String, usize)> = match contents {
-        Some(c) => c.to_vec(),
-        None => content_titles(report).into_iter().map(|t| (t, 0)).collect(),
-    };
-    sections::contents(&mut w, &entries);
-    let mut mark = |w: &writer::Writer, title: String| found.push((title, w.page_number()));
+    let slots = sections::contents(&mut w, &content_titles(report));
+    let mark = |w: &writer::Writer, pages: &mut Vec<usize>| pages.push(w.page_number());
     w.ensure(220.0);
-    mark(&w, "About this inspection".into());
+    mark(&w, &mut pages);
     sections::about(&mut w, report);
     for area in &report.areas {
         w.ensure(cards::start_height(area));
-        mark(&w, area.heading.clone());
+        mark(&w, &mut pages);
         cards::area(&mut w, area);
     }
     w.ensure(160.0);
-    mark(&w, "Inspector's statement".into());
+    mark(&w, &mut pages);
     sections::attestation(&mut w, report);
     w.ensure(90.0);
-    mark(&w, "Limits of this inspection".into());
+    mark(&w, &mut pages);
     sections::limits(&mut w, report);
     w.ensure(200.0);
-    mark(&w, "For the professional: checks and assumptions".into());
+    mark(&w, &mut pages);
     sections::professional(&mut w, report);
     w.ensure(100.0);
-    mark(&w, "Method, design values and sources".into());
+    mark(&w, &mut pages);
     sections::appendix(&mut w, report);
-    (w, found)
+    sections::fill_contents(&mut w, &slots, &pages);
+    w
 }
 
 fn content_titles(report: &Report) -> Vec<String> {

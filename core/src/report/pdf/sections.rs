@@ -10,6 +10,8 @@ pub const BODY: f32 = 8.5;
 pub const SMALL: f32 = 7.0;
 /// Width of a photo beside a first-page item.
 const THUMB: f32 = 92.0;
+/// How many photos stand beside a first-page item; more go in rows under it.
+const BESIDE: usize = 2;
 
 /// A heading, kept on the page with at least three lines of what follows it (a block that
 /// needs more room asks for it before its heading).
@@ -178,14 +180,16 @@ fn band(label: &str) -> (f32, f32, f32) {
 fn action_item(w: &mut Writer, item: &ActionItem) {
     let number = format!("{}.", item.number);
     let x = 22.0;
-    let photo_w = if item.photos.is_empty() {
-        0.0
+    // One or two photos stand beside the text; more go in rows under it.
+    let beside: &[Figure] = if item.photos.len() <= BESIDE {
+        &item.photos
     } else {
-        THUMB + 10.0
+        &[]
     };
+    let photo_w = if beside.is_empty() { 0.0 } else { THUMB + 10.0 };
     let width = w.content_width() - x - photo_w;
     let lines = fonts::wrap(&item.sentence, BODY, Face::Bold, width).len() + 3;
-    let photos_h = item.photos.len() as f32 * (THUMB * 0.75 + SMALL * 1.6);
+    let photos_h = beside.len() as f32 * (THUMB * 0.75 + SMALL * 1.6);
     w.ensure((lines as f32 * BODY * LEADING + 6.0).max(photos_h + 4.0));
     w.space(4.0);
     let top = w.y;
@@ -254,7 +258,7 @@ fn action_item(w: &mut Writer, item: &ActionItem) {
     let text_bottom = w.y;
     let mut y = top;
     let px = MARGIN + w.content_width() - THUMB;
-    for photo in &item.photos {
+    for photo in beside {
         let h = super::cards::image_at(w, photo, px, y, THUMB, THUMB * 0.75);
         let label = format!("Figure {}", photo.number);
         w.text_at(
@@ -268,6 +272,10 @@ fn action_item(w: &mut Writer, item: &ActionItem) {
         y -= h + SMALL * 1.6;
     }
     w.y = text_bottom.min(y);
+    if beside.is_empty() && !item.photos.is_empty() {
+        w.space(3.0);
+        super::cards::photo_row_at(w, &item.photos, 5, x);
+    }
     w.space(1.0);
 }
 
@@ -284,23 +292,34 @@ fn short_item(w: &mut Writer, item: &ActionItem) {
 }
 
 /// The contents, with the page each part starts on.
-pub fn contents(w: &mut Writer, entries: &[(String, usize)]) {
+pub fn contents(w: &mut Writer, titles: &[String]) -> Vec<PageSlot> {
     heading(w, "Contents", 12.0);
-    for (title, page) in entries {
+    let mut slots = Vec::new();
+    for title in titles {
         w.ensure(BODY * 1.4);
         w.y -= BODY * 1.4;
-        let page = page.to_string();
-        let pw = fonts::width(&page, BODY, Face::Regular);
-        let title = super::writer::fit(title, BODY, Face::Regular, w.content_width() - pw - 20.0);
+        let title = super::writer::fit(title, BODY, Face::Regular, w.content_width() - 40.0);
         w.text_at(MARGIN, w.y + 2.0, &title, BODY, Face::Regular, INK);
-        w.text_at(
-            MARGIN + w.content_width() - pw,
-            w.y + 2.0,
-            &page,
-            BODY,
-            Face::Regular,
-            INK,
-        );
+        slots.push(PageSlot {
+            page: w.page_number(),
+            y: w.y + 2.0,
+        });
+    }
+    slots
+}
+
+/// Where a contents line's page number goes, written once the pages are known.
+pub struct PageSlot {
+    pub page: usize,
+    pub y: f32,
+}
+
+/// Writes each part's page number into its contents line.
+pub fn fill_contents(w: &mut Writer, slots: &[PageSlot], pages: &[usize]) {
+    for (slot, page) in slots.iter().zip(pages) {
+        let text = page.to_string();
+        let x = MARGIN + w.content_width() - fonts::width(&text, BODY, Face::Regular);
+        w.text_on_page(slot.page, x, slot.y, &text, BODY, Face::Regular, INK);
     }
 }
 

@@ -75,6 +75,29 @@ impl Writer {
         self.y = self.height - MARGIN - HEAD_SPACE;
     }
 
+    /// Text on an earlier page (from 1), or on this one: for what is known only later, such
+    /// as the contents' page numbers.
+    #[allow(clippy::too_many_arguments)]
+    pub fn text_on_page(
+        &mut self,
+        page: usize,
+        x: f32,
+        y: f32,
+        text: &str,
+        size: f32,
+        style: Face,
+        color: (f32, f32, f32),
+    ) {
+        if page == self.page_number() {
+            self.text_at(x, y, text, size, style, color);
+        } else if let Some(ops) = self.pages.get_mut(page - 1) {
+            let ops = std::mem::take(ops);
+            let current = std::mem::replace(&mut self.ops, ops);
+            self.text_at(x, y, text, size, style, color);
+            self.pages[page - 1] = std::mem::replace(&mut self.ops, current);
+        }
+    }
+
     /// The number of the page being written, from 1.
     pub fn page_number(&self) -> usize {
         self.pages.len() + 1
