@@ -4,7 +4,6 @@
 
 use std::collections::HashSet;
 use std::path::{Path, PathBuf};
-use std::process::Command;
 use undercroft_core::interchange::from_json;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
 use undercroft_core::store::{FindingNote, Store};

@@ -21,7 +21,7 @@ input, select, textarea { font: inherit; width: 100%; box-sizing: border-box; mi
 label { display: block; margin: 10px 0 4px; font-weight: 600; }
 .field-error { color: var(--over); font-weight: 600; }
 .checks label { display: flex; align-items: center; gap: 8px; font-weight: 400; min-height: 44px; margin: 0; }
-.checks input { width: 44px; min-height: 44px; margin: 0; }
+.checks input { width: 44px; min-height: 44px; margin: 0; flex: none; }
 figure.girder-view figcaption { font-size: 14px; color: var(--muted); }
 ul.findings-brief li { padding: 8px 0; border-bottom: 1px solid var(--line); }
 ul.list { list-style: none; padding: 0; margin: 0; }

@@ -250,12 +250,19 @@ async function main() {
   const findings = await page.locator("main").innerText();
   assert.match(findings, /R502\.3/, "the span finding cites its table");
   assert.match(findings, /R502\.8\.1/, "the notch finding cites its section");
+  assert.match(findings, /Who acts: Engineer first/, "who acts, as the report says it");
   await shot(page, "findings");
+  // The inspector says the notch is one for the owner to watch: the report follows.
+  const notchCard = page.locator(".card.finding").filter({ hasText: "Notch in a sawn joist" });
+  await notchCard.getByRole("button", { name: /Note, recommendation/ }).tap();
+  await notchCard.locator("select").selectOption("owner-watch");
+  await notchCard.getByText("Who acts: Owner to watch").waitFor();
 
   console.log("report: build it");
   await tapLink(page, ADDRESS);
   await page.locator("#report-link").tap();
   await page.getByRole("heading", { name: "Report" }).waitFor();
+  await page.locator("#repair-options").check();
   await page.locator("#build-report").tap();
   await page.locator("#report-path").waitFor({ timeout: 60000 });
   const pdfPath = (await page.locator("#report-path").innerText()).trim();
@@ -270,6 +277,9 @@ async function main() {
   const text = execFileSync("pdftotext", [pdfPath, "-"]).toString();
   assert.ok(text.includes(ADDRESS), "the address is in the PDF");
   assert.ok(text.includes("R502.8.1"), "the notch citation is in the PDF");
+  const watch = text.indexOf("Owner to watch");
+  assert.ok(watch > 0 && text.indexOf("Notch in a sawn joist", watch) > watch, "the notch is under Owner to watch");
+  assert.ok(text.includes("Repair option"), "the repair options asked for are in the PDF");
 
   console.log("settings");
   await page.goto(url);

@@ -112,10 +112,13 @@ pub fn ReportView(id: String) -> Element {
                             .change(|s| s.record_report(&inspection.id, &name, &bytes, &findings))
                         {
                             Ok(_) => {
+                                let plural = |n: usize, one: &str, many: &str| {
+                                    format!("{n} {}", if n == 1 { one } else { many })
+                                };
                                 progress.set(Some(format!(
-                                    "Report ready: {} findings in {} areas, {:.1} MB",
-                                    evaluation.findings.len(),
-                                    report.areas.len(),
+                                    "Report ready: {} in {}, {:.1} MB",
+                                    plural(evaluation.findings.len(), "finding", "findings"),
+                                    plural(report.areas.len(), "area", "areas"),
                                     bytes.len() as f64 / 1e6
                                 )));
                                 built.set(Some(path));

@@ -53,7 +53,7 @@ pub fn sentence(g: &Group) -> String {
         (Status::OverLimit | Status::NearLimit, Some(_))
             if matches!(f.rule_id(), "joist-span" | "deck-joist-span") =>
         {
-            format!("{}", bare(&f.summary()))
+            bare(&f.summary()).to_string()
         }
         (Status::OverLimit, Some((c, m, l))) => match c.bound {
             Bound::AtMost => format!(
