@@ -130,7 +130,13 @@ impl Wording for SagDetail {
                 "L/{:.0} in Table R301.7 limits the calculated deflection under live load; a measured sag also holds creep, shrinkage and how the joist was installed, so this comparison is a reference, not a code violation",
                 self.denominator
             ),
-            format!("{} reading(s) along a line stretched between the bearings", self.readings),
+            format!(
+                "{} along a line stretched between the bearings",
+                match self.readings {
+                    1 => "1 reading".to_string(),
+                    n => format!("{n} readings"),
+                }
+            ),
         ]
     }
 
