@@ -63,3 +63,21 @@ pub fn tool(name: &str, args: &[&std::ffi::OsStr]) -> String {
 pub fn normalise(text: &str) -> String {
     text.split_whitespace().collect::<Vec<_>>().join(" ")
 }
+
+/// A scratch folder for one test, removed when the test ends.
+pub struct TempDir(pub PathBuf);
+
+impl TempDir {
+    /// A fresh folder named for the test and this process.
+    pub fn new(name: &str) -> TempDir {
+        let dir = std::env::temp_dir().join(format!("undercroft-{name}-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        TempDir(dir)
+    }
+}
+
+impl Drop for TempDir {
+    fn drop(&mut self) {
+        std::fs::remove_dir_all(&self.0).ok();
+    }
+}

@@ -3,29 +3,12 @@
 //! embedded JPEG without EXIF, non-Latin names extractable, big reports build, both papers.
 
 use std::collections::HashSet;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use undercroft_core::interchange::from_json;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
 use undercroft_core::store::{FindingNote, Store};
 use undercroft_core::{evaluate, Inspection};
-use undercroft_tests::{demo_images, demo_path, normalise, tool};
-
-struct Temp(PathBuf);
-
-impl Temp {
-    fn new(name: &str) -> Temp {
-        let dir =
-            std::env::temp_dir().join(format!("undercroft-report-{name}-{}", std::process::id()));
-        std::fs::create_dir_all(&dir).unwrap();
-        Temp(dir)
-    }
-}
-
-impl Drop for Temp {
-    fn drop(&mut self) {
-        std::fs::remove_dir_all(&self.0).ok();
-    }
-}
+use undercroft_tests::{demo_images, demo_path, normalise, tool, TempDir};
 
 fn demo() -> Inspection {
     from_json(&std::fs::read_to_string(demo_path()).unwrap()).unwrap()
@@ -143,7 +126,7 @@ fn report_value_snapshot() {
 
 #[test]
 fn pdf_holds_every_finding_photo_and_name() {
-    let t = Temp::new("readback");
+    let t = TempDir::new("report-readback");
     let (store, inspection) = demo_store(&t.0);
     let bytes = render(&store, &inspection, Paper::Letter);
     let path = t.0.join("report.pdf");
@@ -235,7 +218,7 @@ fn pdf_holds_every_finding_photo_and_name() {
 
 #[test]
 fn letter_and_a4() {
-    let t = Temp::new("paper");
+    let t = TempDir::new("report-paper");
     let (store, inspection) = demo_store(&t.0);
     for (paper, expect) in [
         (Paper::Letter, "612 x 792 pts (letter)"),
@@ -268,7 +251,7 @@ fn letter_and_a4() {
 
 #[test]
 fn two_hundred_findings_and_three_hundred_photos_build() {
-    let t = Temp::new("big");
+    let t = TempDir::new("report-big");
     let mut store = Store::open(&t.0.join("store.sqlite")).unwrap();
     let inspection = undercroft_core::generate::inspection_with_members(60);
     store.import_inspection(&inspection).unwrap();
@@ -308,7 +291,7 @@ fn two_hundred_findings_and_three_hundred_photos_build() {
 
 #[test]
 fn hostile_text_still_makes_a_sound_report() {
-    let t = Temp::new("hostile");
+    let t = TempDir::new("report-hostile");
     let mut inspection = demo();
     inspection.property.address =
         format!("{} 李 🏠\u{0}\t\r end", "Very long address ".repeat(600));
@@ -334,7 +317,7 @@ fn hostile_text_still_makes_a_sound_report() {
 /// forms back in logical order). Observation notes reach the report.
 #[test]
 fn every_promised_script_reads_back() {
-    let t = Temp::new("scripts");
+    let t = TempDir::new("report-scripts");
     let mut inspection = demo();
     let samples = [
         "Zoë Ångström-Nguyễn",

@@ -8,24 +8,7 @@ use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, Report, Repo
 use undercroft_core::store::Store;
 use undercroft_core::units::Length;
 use undercroft_core::{evaluate, Inspection};
-use undercroft_tests::{demo_images, demo_path, normalise, tool};
-
-struct Temp(PathBuf);
-
-impl Temp {
-    fn new(name: &str) -> Temp {
-        let dir =
-            std::env::temp_dir().join(format!("undercroft-reader-{name}-{}", std::process::id()));
-        std::fs::create_dir_all(&dir).unwrap();
-        Temp(dir)
-    }
-}
-
-impl Drop for Temp {
-    fn drop(&mut self) {
-        std::fs::remove_dir_all(&self.0).ok();
-    }
-}
+use undercroft_tests::{demo_images, demo_path, normalise, tool, TempDir};
 
 fn demo() -> Inspection {
     undercroft_core::interchange::from_json(&std::fs::read_to_string(demo_path()).unwrap()).unwrap()
@@ -82,7 +65,7 @@ fn pages(path: &Path) -> Vec<String> {
 
 #[test]
 fn the_first_page_says_what_to_do_most_pressing_first() {
-    let t = Temp::new("first");
+    let t = TempDir::new("reader-first");
     let (report, path) = report_of(&t.0, &demo(), true, false);
     let pages = pages(&path);
     let first = normalise(&pages[0]);
@@ -148,7 +131,7 @@ fn the_first_page_says_what_to_do_most_pressing_first() {
 
 #[test]
 fn the_client_pages_carry_no_rule_ids_or_formulas() {
-    let t = Temp::new("plain");
+    let t = TempDir::new("reader-plain");
     let (_, path) = report_of(&t.0, &demo(), true, false);
     let all = pages(&path).join("\n");
     let client = &all[..all
@@ -183,7 +166,7 @@ fn the_client_pages_carry_no_rule_ids_or_formulas() {
 
 #[test]
 fn five_joists_over_span_read_as_one_finding_with_the_worst() {
-    let t = Temp::new("group");
+    let t = TempDir::new("reader-group");
     let mut inspection = demo();
     let run = &mut inspection.areas[0].runs[1];
     let template = run.joists[0].clone();
@@ -213,14 +196,14 @@ fn five_joists_over_span_read_as_one_finding_with_the_worst() {
 
 #[test]
 fn repair_options_only_when_turned_on() {
-    let t = Temp::new("options");
+    let t = TempDir::new("reader-options");
     let mut inspection = demo();
     inspection.photos.clear();
     let (_, off) = report_of(&t.0, &inspection, false, false);
     let off_text = normalise(&pages(&off).join("\n"));
     assert!(!off_text.contains("Repair option"));
     assert!(!off_text.contains("options to discuss are listed"));
-    let t2 = Temp::new("options-on");
+    let t2 = TempDir::new("reader-options-on");
     let (_, on) = report_of(&t2.0, &inspection, false, true);
     let on_text = normalise(&pages(&on).join("\n"));
     assert!(on_text.contains("Repair option"), "{on_text}");
@@ -228,7 +211,7 @@ fn repair_options_only_when_turned_on() {
 
 #[test]
 fn a_spacing_of_19_2_in_reads_as_typed_and_a_refused_one_is_listed() {
-    let t = Temp::new("spacing");
+    let t = TempDir::new("reader-spacing");
     let mut inspection = demo();
     inspection.photos.clear();
     // Source: IRC 2018 Table R502.3.1(2) heads a column "19.2".
@@ -245,7 +228,7 @@ fn a_spacing_of_19_2_in_reads_as_typed_and_a_refused_one_is_listed() {
 
 #[test]
 fn the_contents_point_at_the_right_pages_and_no_heading_ends_a_page() {
-    let t = Temp::new("contents");
+    let t = TempDir::new("reader-contents");
     let (report, path) = report_of(&t.0, &demo(), true, false);
     let pages = pages(&path);
     let contents_page = pages.iter().find(|p| p.contains("Contents")).unwrap();

@@ -4,7 +4,7 @@
 
 use super::fonts::{self, Face};
 use super::writer::{Writer, INK, LEADING, MARGIN, MUTED};
-use crate::report::{ActionItem, Figure, Report};
+use crate::report::{ActionItem, Figure, ProblemLine, Report};
 
 pub const BODY: f32 = 8.5;
 pub const SMALL: f32 = 7.0;
@@ -147,23 +147,25 @@ pub fn actions(w: &mut Writer, r: &Report) {
             }
         }
     }
-    if !r.actions.input_problems.is_empty() {
-        heading(w, "Entries that could not be used (to be corrected)", 11.0);
-        for p in &r.actions.input_problems {
-            w.ensure(BODY * 2.8);
-            w.paragraph(&p.text, BODY, Face::Regular, 0.0, INK);
-            w.paragraph(&p.location, SMALL, Face::Regular, 0.0, MUTED);
-            w.space(2.0);
-        }
+    problem_list(
+        w,
+        "Entries that could not be used (to be corrected)",
+        &r.actions.input_problems,
+    );
+    problem_list(w, "Set aside by the inspector", &r.actions.set_aside);
+}
+
+/// A headed list of lines, each with where it is; nothing when empty.
+fn problem_list(w: &mut Writer, title: &str, lines: &[ProblemLine]) {
+    if lines.is_empty() {
+        return;
     }
-    if !r.actions.set_aside.is_empty() {
-        heading(w, "Set aside by the inspector", 11.0);
-        for p in &r.actions.set_aside {
-            w.ensure(BODY * 2.8);
-            w.paragraph(&p.text, BODY, Face::Regular, 0.0, INK);
-            w.paragraph(&p.location, SMALL, Face::Regular, 0.0, MUTED);
-            w.space(2.0);
-        }
+    heading(w, title, 11.0);
+    for p in lines {
+        w.ensure(BODY * 2.8);
+        w.paragraph(&p.text, BODY, Face::Regular, 0.0, INK);
+        w.paragraph(&p.location, SMALL, Face::Regular, 0.0, MUTED);
+        w.space(2.0);
     }
 }
 
