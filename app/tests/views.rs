@@ -285,3 +285,15 @@ fn run_screen_links_its_girder() {
     assert!(html.contains("Bears on"), "{html}");
     assert!(html.contains("Centre girder (Kitchen crawlspace)"));
 }
+
+#[test]
+fn report_screen_says_what_to_look_at_before_handing_over() {
+    let page = render(&format!("/inspection/{DEMO}/report"));
+    let html = &page[page.find("<main").expect("the screen")..];
+    let check = &html[html.find("before-handover").expect("the checklist")..];
+    // The demo's photos are references here, without their images on this device.
+    assert!(check.contains("7 photos are not on this device"), "{check}");
+    assert!(check.contains("have no photo"), "{check}");
+    assert!(!check.contains("No licence number"));
+    assert!(html.contains("repair-options"));
+}

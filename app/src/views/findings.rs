@@ -2,6 +2,7 @@
 //! recommendation; the inspector can add a note, write their own recommendation, or set a
 //! finding aside as not applicable with a reason. Each is saved as it is typed.
 
+use super::findings_filter::{shown, StatusFilter};
 use crate::components::StatusBadge;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
@@ -22,6 +23,7 @@ struct Row {
     citation: String,
     recommendation: String,
     location: String,
+    area_id: String,
     note: FindingNote,
     /// Who acts and how soon, as the report will say it.
     priority: Priority,
@@ -39,6 +41,9 @@ pub fn Findings(id: String) -> Element {
             store.finding_notes(&id).unwrap_or_default(),
         )
     };
+    let mut filter = use_signal(|| StatusFilter::NotWithin);
+    let mut area = use_signal(|| None::<String>);
+    let mut show_within = use_signal(|| false);
     let Ok(inspection) = loaded else {
         return rsx! { main { p { "This inspection is not in the store." } } };
     };
@@ -82,12 +87,18 @@ pub fn Findings(id: String) -> Element {
                     .clone()
                     .unwrap_or_else(|| f.recommendation()),
                 location: f.place.location.to_string(),
+                area_id: f.place.area_id.to_string(),
                 priority: effective_priority(f, note.priority),
                 default_priority: default_priority(f),
                 note,
             }
         })
         .collect();
+    let status_of = status_and_area;
+    let shown_rows = shown(&rows, status_of, filter(), area().as_deref());
+    // Within-limit checks are folded under the default view, shown on request.
+    let within_rows = shown(&rows, status_of, StatusFilter::Within, area().as_deref());
+    let within_count = within_rows.len();
     rsx! {
         main {
             nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
@@ -103,11 +114,44 @@ pub fn Findings(id: String) -> Element {
                     }
                 }
             }
-            for row in rows {
-                FindingCard { key: "{row.key}", inspection_id: id.clone(), row }
+            div { class: "filters",
+                label { r#for: "status-filter", "Show" }
+                select { id: "status-filter", onchange: move |e| filter.set(StatusFilter::parse(&e.value())),
+                    for f in StatusFilter::ALL {
+                        option { value: "{f.key()}", selected: filter() == f, "{f.label()}" }
+                    }
+                }
+                label { r#for: "area-filter", "Where" }
+                select { id: "area-filter", onchange: move |e| area.set(Some(e.value()).filter(|v| !v.is_empty())),
+                    option { value: "", selected: area().is_none(), "Every area" }
+                    for a in inspection.areas.iter() {
+                        option { value: "{a.id}", selected: area().as_deref() == Some(a.id.as_str()), "{a.name}" }
+                    }
+                }
+            }
+            if shown_rows.is_empty() {
+                p { class: "muted", id: "no-findings", "No finding of this kind here." }
+            }
+            for row in shown_rows {
+                FindingCard { key: "{row.key}", inspection_id: id.clone(), row: row.clone() }
+            }
+            if filter() == StatusFilter::NotWithin && within_count > 0 {
+                button { class: "quiet", id: "show-within", onclick: move |_| show_within.toggle(),
+                    if show_within() { "Fold the {within_count} checks within their limits" } else { "Show the {within_count} checks within their limits" }
+                }
+                if show_within() {
+                    for row in within_rows {
+                        FindingCard { key: "{row.key}", inspection_id: id.clone(), row: row.clone() }
+                    }
+                }
             }
         }
     }
+}
+
+/// A row's status and area, for the filters.
+fn status_and_area(r: &Row) -> (undercroft_core::Status, &str) {
+    (r.status, r.area_id.as_str())
 }
 
 #[component]

@@ -2,6 +2,7 @@
 
 mod area;
 mod findings;
+mod findings_filter;
 mod girder;
 mod inspection;
 mod inspections;

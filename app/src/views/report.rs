@@ -3,6 +3,7 @@
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::evaluate;
+use undercroft_core::report::readiness::before_handover;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
 
 /// Lets the screen draw the progress line before the next step runs.
@@ -57,6 +58,20 @@ pub fn ReportView(id: String) -> Element {
     };
     let Some(inspection) = inspection else {
         return rsx! { main { p { "This inspection is not in the store." } } };
+    };
+    // What to look at before handing the report over.
+    let checklist = {
+        let with_images: std::collections::HashSet<String> = app
+            .store
+            .borrow()
+            .photos_of_inspection(&inspection.id)
+            .unwrap_or_default()
+            .into_iter()
+            .filter(|p| p.report_path.is_some())
+            .map(|p| p.id)
+            .collect();
+        let evaluation = app.evaluation(&inspection);
+        before_handover(&inspection, &evaluation, &with_images)
     };
     let build = {
         let app = app.clone();
@@ -137,6 +152,17 @@ pub fn ReportView(id: String) -> Element {
         main {
             nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
             h1 { "Report" }
+            div { class: "card", id: "before-handover",
+                h2 { "Before you hand it over" }
+                if checklist.is_empty() {
+                    p { "Nothing left to look at: name, licence, photos and entries are in order." }
+                }
+                ul {
+                    for line in checklist.iter() {
+                        li { "{line}" }
+                    }
+                }
+            }
             label { r#for: "paper", "Paper" }
             select { id: "paper", onchange: move |e| paper.set(e.value()),
                 option { value: "letter", selected: paper() == "letter", "Letter" }

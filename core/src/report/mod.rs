@@ -9,6 +9,7 @@ mod girder_view;
 mod grouping;
 mod model;
 pub mod pdf;
+pub mod readiness;
 mod renumber;
 mod side_view;
 mod wording;
