@@ -257,9 +257,13 @@ async function main() {
   await notchCard.getByRole("button", { name: /Note, recommendation/ }).tap();
   await notchCard.locator("select").selectOption("owner-watch");
   await notchCard.getByText("Who acts: Owner to watch").waitFor();
+  // A finding leads to what it is about: the notch, its depth as entered.
+  await notchCard.getByRole("link", { name: "Go to what it is about" }).tap();
+  await page.getByRole("heading", { name: "Notch" }).waitFor();
+  assert.equal(await page.locator("#depth").inputValue(), `2"`);
 
   console.log("report: build it");
-  await tapLink(page, ADDRESS);
+  await upToInspection(page);
   await page.locator("#report-link").tap();
   await page.getByRole("heading", { name: "Report" }).waitFor();
   await page.locator("#repair-options").check();

@@ -10,7 +10,9 @@ use crate::use_app;
 use base64::Engine;
 use dioxus::prelude::*;
 
-/// The script that reads picked files and sends each back as `{name, size, data}`.
+/// The script that reads picked files and sends each back as `{name, size, data}`. Files
+/// picked before the script ran (the screen is drawn before its listener is wired, most of
+/// all right after a save redraws it) are sent when it runs, not lost.
 fn reader_script(input_id: &str) -> String {
     format!(
         r#"
@@ -18,15 +20,18 @@ const input = document.getElementById("{input_id}");
 if (input && !input.dataset.ready) {{
   input.dataset.ready = "1";
   input.addEventListener("click", e => e.stopPropagation(), true);
-  input.addEventListener("change", async () => {{
-    for (const file of input.files) {{
+  const send = async () => {{
+    const files = Array.from(input.files);
+    input.value = "";
+    for (const file of files) {{
       const bytes = new Uint8Array(await file.arrayBuffer());
       let text = "";
       for (let i = 0; i < bytes.length; i += 0x8000) text += String.fromCharCode.apply(null, bytes.subarray(i, i + 0x8000));
       dioxus.send({{ name: file.name, size: file.size, data: btoa(text) }});
     }}
-    input.value = "";
-  }});
+  }};
+  input.addEventListener("change", send);
+  if (input.files && input.files.length > 0) send();
 }}
 "#
     )

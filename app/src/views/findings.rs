@@ -2,6 +2,7 @@
 //! recommendation; the inspector can add a note, write their own recommendation, or set a
 //! finding aside as not applicable with a reason. Each is saved as it is typed.
 
+use super::finding_route::route_of;
 use super::findings_filter::{shown, StatusFilter};
 use crate::components::StatusBadge;
 use crate::{use_app, Route};
@@ -24,6 +25,8 @@ struct Row {
     recommendation: String,
     location: String,
     area_id: String,
+    /// The screen of what the finding is about.
+    go: Option<Route>,
     note: FindingNote,
     /// Who acts and how soon, as the report will say it.
     priority: Priority,
@@ -88,6 +91,7 @@ pub fn Findings(id: String) -> Element {
                     .unwrap_or_else(|| f.recommendation()),
                 location: f.place.location.to_string(),
                 area_id: f.place.area_id.to_string(),
+                go: route_of(&inspection, f),
                 priority: effective_priority(f, note.priority),
                 default_priority: default_priority(f),
                 note,
@@ -184,6 +188,9 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
             p { class: "muted", "Basis: {row.basis}. Cites {row.citation}" }
             p { "{row.recommendation}" }
             p { class: "muted priority", "Who acts: {row.priority.label()}" }
+            if let Some(go) = row.go.clone() {
+                Link { class: "go", to: go, "Go to what it is about" }
+            }
             if !row.note.note.is_empty() {
                 p { "Note: {row.note.note}" }
             }

@@ -1,6 +1,7 @@
 //! The screens, one per route.
 
 mod area;
+mod finding_route;
 mod findings;
 mod findings_filter;
 mod girder;
