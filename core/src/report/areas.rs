@@ -5,7 +5,7 @@ use super::build::{loads_text, ReportInput};
 use super::grouping::Group;
 use super::model::*;
 use super::side_view::side_view;
-use super::wording::{checked_row, status_words};
+use super::wording::{checked_row, short_place, status_words};
 use crate::finding::Status;
 use crate::load_path::GirderContext;
 use crate::model::{Area, PhotoRef};
@@ -225,14 +225,7 @@ fn number_group<'a>(
         }
         options.dedup();
     }
-    let short = |location: &str| {
-        location
-            .strip_prefix(g.place.as_str())
-            .map(|s| s.trim_start_matches(" > "))
-            .filter(|s| !s.is_empty())
-            .unwrap_or(location)
-            .to_string()
-    };
+    let short = |location: &str| short_place(location, &g.place);
     let also_at = g
         .findings
         .iter()
@@ -306,16 +299,6 @@ fn merge_alike(rows: Vec<CheckedRow>) -> Vec<CheckedRow> {
         }
     }
     out
-}
-
-/// A location without the area's name in front ("Kitchen joists > Joist 7").
-fn short_place(location: &str, area_name: &str) -> String {
-    location
-        .strip_prefix(area_name)
-        .map(|s| s.trim_start_matches(" > "))
-        .filter(|s| !s.is_empty())
-        .unwrap_or(location)
-        .to_string()
 }
 
 /// Measured against the limit, or why it was not (fully) checked.

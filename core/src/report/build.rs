@@ -5,7 +5,7 @@
 use super::areas::{area_section, AreaWork, Numbered};
 use super::grouping::{group, Group, Parents};
 use super::model::*;
-use super::wording::{check_line, sentence};
+use super::wording::{check_line, count, sentence};
 use crate::engine::Evaluation;
 use crate::finding::{benchmark_note, Basis, Finding, Status};
 use crate::model::Inspection;
@@ -153,15 +153,6 @@ pub fn loads_text(l: &crate::model::ResolvedLoads) -> String {
         l.dead.0,
         l.deflection_denominator
     )
-}
-
-/// "1 finding", "3 findings".
-pub fn count(n: usize, one: &str, many: &str) -> String {
-    if n == 1 {
-        format!("1 {one}")
-    } else {
-        format!("{n} {many}")
-    }
 }
 
 fn actions(

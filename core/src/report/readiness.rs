@@ -2,6 +2,7 @@
 //! statement, findings that need action but have no photo, entries the engine could not use,
 //! and photos whose image is not on this device.
 
+use super::wording::count;
 use crate::engine::Evaluation;
 use crate::finding::Status;
 use crate::model::Inspection;
@@ -40,14 +41,14 @@ pub fn before_handover(
     if unphotographed > 0 {
         out.push(format!(
             "{} over a limit or seen to evaluate {} no photo.",
-            plural(unphotographed, "finding", "findings"),
+            count(unphotographed, "finding", "findings"),
             if unphotographed == 1 { "has" } else { "have" }
         ));
     }
     if !evaluation.problems.is_empty() {
         out.push(format!(
             "{} could not be used: correct {} or the report lists {}.",
-            plural(evaluation.problems.len(), "entry", "entries"),
+            count(evaluation.problems.len(), "entry", "entries"),
             if evaluation.problems.len() == 1 {
                 "it"
             } else {
@@ -68,19 +69,11 @@ pub fn before_handover(
     if missing > 0 {
         out.push(format!(
             "{} not on this device: the report shows a blank in {} place.",
-            plural(missing, "photo is", "photos are"),
+            count(missing, "photo is", "photos are"),
             if missing == 1 { "its" } else { "their" }
         ));
     }
     out
-}
-
-fn plural(n: usize, one: &str, many: &str) -> String {
-    if n == 1 {
-        format!("1 {one}")
-    } else {
-        format!("{n} {many}")
-    }
 }
 
 #[cfg(test)]

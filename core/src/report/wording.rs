@@ -139,15 +139,10 @@ fn decapital(text: &str) -> String {
 /// A check met as one table row; a group's row gives its count and its worst case.
 pub fn checked_row(g: &Group, area_name: &str) -> CheckedRow {
     let f = g.worst();
-    let place = g
-        .place
-        .strip_prefix(area_name)
-        .map(|s| s.trim_start_matches(" > "))
-        .filter(|s| !s.is_empty())
-        .unwrap_or(&g.place);
+    let place = short_place(&g.place, area_name);
     let location = match g.count_text() {
         Some(count) => format!("{place} ({count})"),
-        None => place.to_string(),
+        None => place,
     };
     let (measured, limit) = match f.governing_check() {
         Some(c) => {
@@ -217,5 +212,25 @@ pub fn short_citation(f: &Finding) -> String {
         (Some(code), _) => format!("{} {}", f.edition, first(code)),
         (None, Some(other)) => first(other),
         (None, None) => String::new(),
+    }
+}
+
+/// A location without the place it is in written in front ("Kitchen joists > Joist 7" in
+/// "Kitchen crawlspace"); the location itself when it is that place or not inside it.
+pub fn short_place(location: &str, within: &str) -> String {
+    location
+        .strip_prefix(within)
+        .map(|s| s.trim_start_matches(" > "))
+        .filter(|s| !s.is_empty())
+        .unwrap_or(location)
+        .to_string()
+}
+
+/// "1 finding", "3 findings".
+pub fn count(n: usize, one: &str, many: &str) -> String {
+    if n == 1 {
+        format!("1 {one}")
+    } else {
+        format!("{n} {many}")
     }
 }

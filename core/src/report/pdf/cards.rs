@@ -70,18 +70,8 @@ const NOTED_COLUMNS: [(&str, f32); 4] = [
 ];
 
 fn noted_table(w: &mut Writer, rows: &[NotedRow]) {
-    let size = 7.5;
-    let header: Vec<String> = NOTED_COLUMNS.iter().map(|c| c.0.to_string()).collect();
-    table_row(
-        w,
-        &header,
-        &NOTED_COLUMNS,
-        size,
-        Face::Bold,
-        Some((0.9, 0.9, 0.88)),
-    );
-    for (n, r) in rows.iter().enumerate() {
-        let cells = vec![
+    let cells = rows.iter().map(|r| {
+        vec![
             format!("{}. {}", r.number, r.what),
             r.location.clone(),
             r.status.clone(),
@@ -97,41 +87,44 @@ fn noted_table(w: &mut Writer, rows: &[NotedRow]) {
                         .join(", ")
                 ),
             },
-        ];
-        table_row(
-            w,
-            &cells,
-            &NOTED_COLUMNS,
-            size,
-            Face::Regular,
-            (n % 2 == 1).then_some((0.97, 0.97, 0.96)),
-        );
-    }
-    w.space(4.0);
+        ]
+    });
+    table(w, &NOTED_COLUMNS, 7.5, cells);
 }
 
 fn checked_table(w: &mut Writer, rows: &[CheckedRow]) {
-    let size = 7.0;
-    let header: Vec<String> = COLUMNS.iter().map(|c| c.0.to_string()).collect();
-    table_row(
-        w,
-        &header,
-        &COLUMNS,
-        size,
-        Face::Bold,
-        Some((0.9, 0.9, 0.88)),
-    );
-    for (n, r) in rows.iter().enumerate() {
-        let cells = vec![
+    let cells = rows.iter().map(|r| {
+        vec![
             r.what.clone(),
             r.location.clone(),
             r.measured.clone(),
             r.limit.clone(),
-        ];
+        ]
+    });
+    table(w, &COLUMNS, 7.0, cells);
+}
+
+/// A table: a shaded header row of the columns' names, then the rows, every other one shaded.
+fn table(
+    w: &mut Writer,
+    columns: &[(&str, f32)],
+    size: f32,
+    rows: impl Iterator<Item = Vec<String>>,
+) {
+    let header: Vec<String> = columns.iter().map(|c| c.0.to_string()).collect();
+    table_row(
+        w,
+        &header,
+        columns,
+        size,
+        Face::Bold,
+        Some((0.9, 0.9, 0.88)),
+    );
+    for (n, cells) in rows.enumerate() {
         table_row(
             w,
             &cells,
-            &COLUMNS,
+            columns,
             size,
             Face::Regular,
             (n % 2 == 1).then_some((0.97, 0.97, 0.96)),
