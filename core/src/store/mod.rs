@@ -158,10 +158,29 @@ impl Store {
 /// it and two writers take turns instead of failing with "database is locked".
 fn configure(conn: &Connection) -> rusqlite::Result<()> {
     conn.busy_timeout(std::time::Duration::from_secs(BUSY_TIMEOUT_SECS))?;
-    conn.pragma_update(None, "journal_mode", "WAL")?;
+    switch_to_wal(conn)?;
     conn.pragma_update(None, "synchronous", "FULL")?;
     conn.pragma_update(None, "foreign_keys", "ON")?;
     Ok(())
+}
+
+/// Puts the store in write-ahead-log mode. Switching needs the database to itself, and
+/// SQLite answers "database is locked" at once, without its busy handler, when another
+/// process is reading it at that moment (two processes opening a new store together): so
+/// the switch is tried again until the other lets go, within the same wait as a writer's.
+fn switch_to_wal(conn: &Connection) -> rusqlite::Result<()> {
+    let deadline = std::time::Instant::now() + std::time::Duration::from_secs(BUSY_TIMEOUT_SECS);
+    loop {
+        match conn.pragma_update(None, "journal_mode", "WAL") {
+            Err(rusqlite::Error::SqliteFailure(e, _))
+                if e.code == rusqlite::ErrorCode::DatabaseBusy
+                    && std::time::Instant::now() < deadline =>
+            {
+                std::thread::sleep(std::time::Duration::from_millis(5));
+            }
+            done => return done,
+        }
+    }
 }
 
 /// How long a writer waits for another to finish. A photo import holds the lock for one
