@@ -6,7 +6,7 @@
 //! Run with `cargo bench -p undercroft-app --bench field_save`.
 
 use std::time::{Duration, Instant};
-use undercroft_app::edits::{save_framing_field, FramingOwner};
+use undercroft_app::edits::{save_framing_field, FramingEdit, FramingOwner};
 use undercroft_app::startup::DEMO_INSPECTION;
 use undercroft_core::forms::{live_check, FramingForm};
 use undercroft_core::store::Store;
@@ -58,8 +58,11 @@ fn main() {
                 &mut form,
                 &stored,
                 units,
-                "clear_span",
-                text,
+                FramingEdit {
+                    field: "clear_span",
+                    value: text,
+                    confirmed: false,
+                },
             )
             .expect("saved");
             saves.push(start.elapsed());

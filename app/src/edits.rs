@@ -2,7 +2,7 @@
 //! (and the field-to-save benchmark measures): the form updated, what reads saved at once,
 //! a field that does not read yet keeping its stored value, and each field's problem returned.
 
-use undercroft_core::forms::{FieldError, FramingForm};
+use undercroft_core::forms::{framing_question, keep_stored, FieldError, FramingForm, Question};
 use undercroft_core::model::Framing;
 use undercroft_core::store::{Result, Store};
 use undercroft_core::units::UnitSystem;
@@ -14,36 +14,76 @@ pub enum FramingOwner<'a> {
         id: &'a str,
         label: &'a str,
     },
-    /// A joist of a run or a single member.
+    /// A joist of a run (`run` holds the run's framing) or a single member.
     Member {
         id: &'a str,
         label: &'a str,
+        run: Option<&'a Framing>,
     },
 }
 
-/// Sets `field` to `value` in `form` and saves the framing that reads (durably: the store
-/// commits with a full sync before this returns). `stored` is the framing as last loaded.
+/// One field changed on the screen. `confirmed` is true when the inspector answered "keep"
+/// to a question about this very value.
+#[derive(Debug, Clone)]
+pub struct FramingEdit<'a> {
+    pub field: &'a str,
+    pub value: String,
+    pub confirmed: bool,
+}
+
+/// What the screen shows after a change: each field's problem, and the question waiting for
+/// an answer (its value not saved until kept).
+#[derive(Debug, Clone, Default, PartialEq)]
+pub struct FieldCheck {
+    pub errors: Vec<FieldError>,
+    pub question: Option<Question>,
+}
+
+/// Sets the edited field in `form` and saves the framing that reads (durably: the store
+/// commits with a full sync before this returns). A field that does not read, or whose value
+/// cannot be what was meant and is not confirmed, keeps its stored value. `stored` is the
+/// framing as last loaded.
 pub fn save_framing_field(
     store: &mut Store,
     owner: FramingOwner,
     form: &mut FramingForm,
     stored: &Framing,
     units: UnitSystem,
-    field: &str,
-    value: String,
-) -> Result<Vec<FieldError>> {
-    form.set(field, value);
-    let (framing, errors) = form.merged_with(stored, units);
+    edit: FramingEdit,
+) -> Result<FieldCheck> {
+    form.set(edit.field, edit.value.clone());
+    let (mut framing, errors) = form.merged_with(stored, units);
+    let reads = !errors.iter().any(|e| e.field == edit.field);
+    let question = (reads && !edit.confirmed)
+        .then(|| {
+            let in_force = match owner {
+                FramingOwner::Member { run: Some(run), .. } => framing.over(run),
+                _ => framing.clone(),
+            };
+            framing_question(edit.field, &edit.value, &in_force, units)
+        })
+        .flatten();
+    if question.is_some() {
+        keep_stored(&mut framing, stored, edit.field);
+    }
     match owner {
         FramingOwner::Run { id, label } => store.update_run(id, label, &framing)?,
-        FramingOwner::Member { id, label } => store.update_member(id, label, &framing)?,
+        FramingOwner::Member { id, label, .. } => store.update_member(id, label, &framing)?,
     }
-    Ok(errors)
+    Ok(FieldCheck { errors, question })
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    fn edit<'a>(field: &'a str, value: &str) -> FramingEdit<'a> {
+        FramingEdit {
+            field,
+            value: value.into(),
+            confirmed: false,
+        }
+    }
 
     fn demo_store(name: &str) -> (Store, std::path::PathBuf) {
         let dir =
@@ -80,10 +120,10 @@ mod tests {
             &mut form,
             &stored,
             UnitSystem::Imperial,
-            "clear_span",
-            "14' 0\"".into(),
+            edit("clear_span", "14' 0\""),
         )
-        .unwrap();
+        .unwrap()
+        .errors;
         assert!(errors.is_empty(), "{errors:?}");
         let saved = store.load_inspection(id).unwrap();
         let (_, run) = saved.run("run-kitchen").unwrap();
@@ -96,10 +136,10 @@ mod tests {
             &mut form,
             &stored,
             UnitSystem::Imperial,
-            "clear_span",
-            "14' 0\"x".into(),
+            edit("clear_span", "14' 0\"x"),
         )
-        .unwrap();
+        .unwrap()
+        .errors;
         assert_eq!(errors.len(), 1);
         assert_eq!(errors[0].field, "clear_span");
         let saved = store.load_inspection(id).unwrap();
@@ -118,6 +158,7 @@ mod tests {
         let owner = FramingOwner::Member {
             id: "joist-k7",
             label: "Joist 7",
+            run: None,
         };
         save_framing_field(
             &mut store,
@@ -125,8 +166,7 @@ mod tests {
             &mut form,
             &Framing::default(),
             UnitSystem::Imperial,
-            "size",
-            "2x12".into(),
+            edit("size", "2x12"),
         )
         .unwrap();
         let saved = store
@@ -143,5 +183,66 @@ mod tests {
         );
         assert_eq!(joist.label, "Joist 7");
         std::fs::remove_dir_all(dir).ok();
+    }
+
+    #[test]
+    fn a_span_that_cannot_be_meant_waits_for_an_answer_and_is_kept_when_confirmed() {
+        let (mut store, dir) = demo_store("question");
+        let id = "0193a1c2-7d00-7000-8000-00000000d001";
+        let span_now = || store_span(&dir, id);
+        let stored = store
+            .load_inspection(id)
+            .unwrap()
+            .run("run-kitchen")
+            .unwrap()
+            .1
+            .framing
+            .clone();
+        let mut form = FramingForm::from_framing(&stored, UnitSystem::Imperial);
+        let owner = FramingOwner::Run {
+            id: "run-kitchen",
+            label: "Kitchen joists",
+        };
+        let check = save_framing_field(
+            &mut store,
+            owner,
+            &mut form,
+            &stored,
+            UnitSystem::Imperial,
+            edit("clear_span", "182'"),
+        )
+        .unwrap();
+        let question = check.question.expect("182 ft is asked about");
+        assert_eq!(question.field, "clear_span");
+        assert_eq!(span_now(), stored.clear_span, "not saved before the answer");
+        let kept = FramingEdit {
+            confirmed: true,
+            ..edit("clear_span", "182'")
+        };
+        let check = save_framing_field(
+            &mut store,
+            owner,
+            &mut form,
+            &stored,
+            UnitSystem::Imperial,
+            kept,
+        )
+        .unwrap();
+        assert_eq!(check, FieldCheck::default());
+        assert_eq!(span_now().map(|l| l.in_inches()), Some(182.0 * 12.0));
+        std::fs::remove_dir_all(dir).ok();
+    }
+
+    /// The run's span as a fresh process would read it.
+    fn store_span(dir: &std::path::Path, id: &str) -> Option<undercroft_core::units::Length> {
+        let store = Store::open(&dir.join("store.sqlite")).unwrap();
+        store
+            .load_inspection(id)
+            .unwrap()
+            .run("run-kitchen")
+            .unwrap()
+            .1
+            .framing
+            .clear_span
     }
 }

@@ -20,6 +20,7 @@ use dioxus::prelude::*;
 #[component]
 pub fn App() -> Element {
     let app = use_app();
+    use_context_provider(components::TapeState::new);
     let screen = app
         .store
         .borrow()

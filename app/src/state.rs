@@ -1,6 +1,6 @@
 //! The app's shared state: the open store, handed to every screen through context.
 
-use crate::edits::{save_framing_field, FramingOwner};
+use crate::edits::{save_framing_field, FieldCheck, FramingEdit, FramingOwner};
 use dioxus::prelude::*;
 use std::cell::RefCell;
 use std::rc::Rc;
@@ -64,14 +64,15 @@ impl AppState {
         form: &mut FramingForm,
         stored: &Framing,
         units: UnitSystem,
-        (field, value): (&str, String),
-    ) -> Vec<FieldError> {
-        self.change(|s| save_framing_field(s, owner, form, stored, units, field, value))
-            .unwrap_or_else(|message| {
-                vec![FieldError {
+        edit: FramingEdit,
+    ) -> FieldCheck {
+        self.change(|s| save_framing_field(s, owner, form, stored, units, edit))
+            .unwrap_or_else(|message| FieldCheck {
+                errors: vec![FieldError {
                     field: "save",
                     message,
-                }]
+                }],
+                question: None,
             })
     }
 

@@ -36,4 +36,19 @@ figure.side-view { margin: 8px 0; }
 .danger-zone { margin-top: 28px; border-top: 1px solid var(--line); padding-top: 8px; }
 button.danger { background: var(--over); border-color: var(--over); color: var(--paper); }
 button + button { margin-left: 8px; }
+.field-needed { color: var(--muted); font-size: 15px; margin: 2px 0 0; }
+.question { border: 2px solid var(--near); border-radius: 10px; padding: 8px 12px; margin: 6px 0 10px; }
+.question p { margin: 0 0 8px; }
+.question .answers { display: flex; flex-wrap: wrap; gap: 8px; }
+.question .answers button { margin: 0; }
+.keypad { position: fixed; left: 0; right: 0; bottom: 0; z-index: 10; background: var(--paper); border-top: 2px solid var(--ink); padding: 6px 6px 10px; box-shadow: 0 -6px 18px rgba(0,0,0,.35); }
+.keypad-shows { margin: 0 4px 6px; min-height: 28px; font-size: 22px; font-variant-numeric: tabular-nums; }
+.keypad .keys, .keypad .fractions { display: grid; gap: 6px; margin-bottom: 6px; max-width: 720px; margin-left: auto; margin-right: auto; }
+.keypad .keys { grid-template-columns: repeat(4, 1fr); }
+.keypad .fractions { grid-template-columns: repeat(8, 1fr); }
+.keypad .key { margin: 0; min-width: 0; padding: 0; height: 52px; font-size: 22px; border-radius: 10px; background: transparent; color: var(--ink); border: 2px solid var(--line); }
+.keypad .key.fraction { font-size: 15px; height: 48px; }
+.keypad .key.done { background: var(--ink); color: var(--paper); border-color: var(--ink); }
+.keypad .key.quiet { font-size: 15px; }
+.keypad-room { height: 330px; }
 "#;

@@ -97,8 +97,12 @@ fn run_shows_the_live_check() {
         "the stored species is picked"
     );
     assert!(
-        html.contains("inputmode=\"decimal\""),
-        "numeric keyboard for spacing"
+        html.contains("id=\"spacing\" class=\"tape\" inputmode=\"none\""),
+        "lengths take the tape keypad, not the phone's keyboard: {html}"
+    );
+    assert!(
+        html.contains("a number alone is inches"),
+        "the rule for a bare number is in sight"
     );
 }
 

@@ -2,11 +2,14 @@
 //! as a tape reads. For a joist, an empty field means "same as the run" and shows the run's
 //! value.
 
+use super::{QuestionCard, TapeInput};
+use crate::edits::FieldCheck;
 use dioxus::prelude::*;
 use undercroft_core::forms::{
-    FramingForm, BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS, ROOM_USES, SIZES,
-    SPECIES, SUPPORTS,
+    FieldError, FramingForm, Question, BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS,
+    ROOM_USES, SIZES, SPECIES, SUPPORTS,
 };
+use undercroft_core::units::{bare_number_hint, UnitSystem};
 
 /// A field changed: its name (as `FramingForm::set` takes it) and its new text.
 pub type FieldChange = (&'static str, String);
@@ -16,25 +19,33 @@ pub fn FramingFields(
     form: FramingForm,
     /// The run's values, for a joist that lists only what differs.
     base: Option<FramingForm>,
+    /// Each field's problem and the question waiting for an answer, shown under its field.
+    check: FieldCheck,
+    /// Metric inspections get the millimetre keypad.
+    metric: bool,
     on_change: EventHandler<FieldChange>,
+    /// "Keep" answered to the question about a field's value.
+    on_keep: EventHandler<FieldChange>,
 ) -> Element {
     let base = base.unwrap_or_default();
     let inherits = base != FramingForm::default();
+    let error = |name: &str| error_of(&check.errors, name);
+    let question = |name: &str| check.question.clone().filter(|q| q.field == name);
     rsx! {
-        Pick { name: "kind", label: "Member", picks: MEMBER_KINDS, value: form.kind.clone(), inherited: inherits.then(|| base.kind.clone()), on_change }
-        Pick { name: "species", label: "Species", picks: SPECIES, value: form.species.clone(), inherited: inherits.then(|| base.species.clone()), on_change }
-        Pick { name: "grade", label: "Grade (from the stamp)", picks: GRADES, value: form.grade.clone(), inherited: inherits.then(|| base.grade.clone()), on_change }
-        Pick { name: "size", label: "Size", picks: SIZES, value: form.size.clone(), inherited: inherits.then(|| base.size.clone()), on_change }
-        Typed { name: "actual", label: "Measured section, if not dressed lumber (1-3/4 x 9-1/2)", inputmode: "text", value: form.actual.clone(), inherited: base.actual.clone(), on_change }
-        Typed { name: "spacing", label: "Spacing, inches on centre", inputmode: "decimal", value: form.spacing.clone(), inherited: base.spacing.clone(), on_change }
-        Typed { name: "clear_span", label: "Clear span (15' 2\", 15-2 or 15)", inputmode: "text", value: form.clear_span.clone(), inherited: base.clear_span.clone(), on_change }
-        Pick { name: "bearing_on", label: "Ends bear on", picks: SUPPORTS, value: form.bearing_on.clone(), inherited: inherits.then(|| base.bearing_on.clone()), on_change }
-        Typed { name: "bearing_length", label: "Bearing length, inches", inputmode: "decimal", value: form.bearing_length.clone(), inherited: base.bearing_length.clone(), on_change }
-        Pick { name: "end_restraint", label: "End restraint", picks: END_RESTRAINTS, value: form.end_restraint.clone(), inherited: inherits.then(|| base.end_restraint.clone()), on_change }
-        Pick { name: "bridging", label: "Bridging", picks: BRIDGING, value: form.bridging.clone(), inherited: inherits.then(|| base.bridging.clone()), on_change }
-        Typed { name: "bridging_interval", label: "Largest distance between bridging lines (feet)", inputmode: "text", value: form.bridging_interval.clone(), inherited: base.bridging_interval.clone(), on_change }
-        Pick { name: "room_use_above", label: "Room above, if not as the area", picks: ROOM_USES, value: form.room_use_above.clone(), inherited: inherits.then(|| base.room_use_above.clone()), on_change }
-        Pick { name: "finishes", label: "Finishes above, if not as the area", picks: FINISHES, value: form.finishes.clone(), inherited: inherits.then(|| base.finishes.clone()), on_change }
+        Pick { name: "kind", label: "Member", picks: MEMBER_KINDS, value: form.kind.clone(), inherited: inherits.then(|| base.kind.clone()), error: error("kind"), on_change }
+        Pick { name: "species", label: "Species", picks: SPECIES, value: form.species.clone(), inherited: inherits.then(|| base.species.clone()), error: error("species"), on_change }
+        Pick { name: "grade", label: "Grade (from the stamp)", picks: GRADES, value: form.grade.clone(), inherited: inherits.then(|| base.grade.clone()), error: error("grade"), on_change }
+        Pick { name: "size", label: "Size", picks: SIZES, value: form.size.clone(), inherited: inherits.then(|| base.size.clone()), error: error("size"), on_change }
+        Typed { name: "actual", tape: false, label: "Measured section, if not dressed lumber (1-3/4 x 9-1/2)", inputmode: "text", value: form.actual.clone(), inherited: base.actual.clone(), error: error("actual"), question: question("actual"), metric, on_change, on_keep }
+        Typed { name: "spacing", tape: true, label: "Spacing on centre", inputmode: "decimal", value: form.spacing.clone(), inherited: base.spacing.clone(), error: error("spacing"), question: question("spacing"), metric, on_change, on_keep }
+        Typed { name: "clear_span", tape: true, label: "Clear span (15' 2\" or 15-2)", inputmode: "text", value: form.clear_span.clone(), inherited: base.clear_span.clone(), error: error("clear_span"), question: question("clear_span"), metric, on_change, on_keep }
+        Pick { name: "bearing_on", label: "Ends bear on", picks: SUPPORTS, value: form.bearing_on.clone(), inherited: inherits.then(|| base.bearing_on.clone()), error: error("bearing_on"), on_change }
+        Typed { name: "bearing_length", tape: true, label: "Bearing length", inputmode: "decimal", value: form.bearing_length.clone(), inherited: base.bearing_length.clone(), error: error("bearing_length"), question: question("bearing_length"), metric, on_change, on_keep }
+        Pick { name: "end_restraint", label: "End restraint", picks: END_RESTRAINTS, value: form.end_restraint.clone(), inherited: inherits.then(|| base.end_restraint.clone()), error: error("end_restraint"), on_change }
+        Pick { name: "bridging", label: "Bridging", picks: BRIDGING, value: form.bridging.clone(), inherited: inherits.then(|| base.bridging.clone()), error: error("bridging"), on_change }
+        Typed { name: "bridging_interval", tape: true, label: "Largest distance between bridging lines", inputmode: "text", value: form.bridging_interval.clone(), inherited: base.bridging_interval.clone(), error: error("bridging_interval"), question: question("bridging_interval"), metric, on_change, on_keep }
+        Pick { name: "room_use_above", label: "Room above, if not as the area", picks: ROOM_USES, value: form.room_use_above.clone(), inherited: inherits.then(|| base.room_use_above.clone()), error: error("room_use_above"), on_change }
+        Pick { name: "finishes", label: "Finishes above, if not as the area", picks: FINISHES, value: form.finishes.clone(), inherited: inherits.then(|| base.finishes.clone()), error: error("finishes"), on_change }
     }
 }
 
@@ -51,6 +62,7 @@ fn Pick(
     value: String,
     /// `Some` for a joist: the run's value, shown on the empty choice.
     inherited: Option<String>,
+    error: Option<String>,
     on_change: EventHandler<FieldChange>,
 ) -> Element {
     let id = field_id(name);
@@ -73,6 +85,9 @@ fn Pick(
                 option { value: "{key}", selected: value == *key, "{text}" }
             }
         }
+        if let Some(e) = error {
+            p { class: "field-error", role: "alert", "{e}" }
+        }
     }
 }
 
@@ -81,20 +96,54 @@ fn Typed(
     name: &'static str,
     label: &'static str,
     inputmode: &'static str,
+    /// A length: the tape keypad opens for it.
+    tape: bool,
     value: String,
     /// The run's value, shown as the placeholder of a joist's empty field.
     inherited: String,
+    error: Option<String>,
+    question: Option<Question>,
+    metric: bool,
     on_change: EventHandler<FieldChange>,
+    on_keep: EventHandler<FieldChange>,
 ) -> Element {
     let id = field_id(name);
-    let placeholder = if inherited.is_empty() {
-        String::new()
-    } else {
+    let placeholder = if !inherited.is_empty() {
         format!("Same as the run: {inherited}")
+    } else if tape {
+        bare_number_hint(if metric {
+            UnitSystem::Metric
+        } else {
+            UnitSystem::Imperial
+        })
+        .to_string()
+    } else {
+        String::new()
     };
+    let typed = value.clone();
     rsx! {
         label { r#for: "{id}", "{label}" }
-        input { id: "{id}", inputmode, autocomplete: "off", value: "{value}", placeholder: "{placeholder}",
-            oninput: move |e| on_change.call((name, e.value())) }
+        if tape {
+            TapeInput { id: id.clone(), value, placeholder, metric, on_input: move |text| on_change.call((name, text)) }
+        } else {
+            input { id: "{id}", inputmode, autocomplete: "off", value: "{value}", placeholder: "{placeholder}",
+                oninput: move |e| on_change.call((name, e.value())) }
+        }
+        if let Some(e) = error {
+            p { class: "field-error", role: "alert", "{e}" }
+        }
+        if let Some(q) = question {
+            QuestionCard { id: format!("{id}-question"), question: q,
+                on_keep: move |_| on_keep.call((name, typed.clone())),
+                on_instead: move |text| on_change.call((name, text)) }
+        }
     }
+}
+
+/// The message of a field's problem, if it has one.
+fn error_of(errors: &[FieldError], name: &str) -> Option<String> {
+    errors
+        .iter()
+        .find(|e| e.field == name)
+        .map(|e| e.message.clone())
 }

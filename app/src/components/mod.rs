@@ -1,21 +1,27 @@
 //! Reusable widgets.
 
+mod autosave_fields;
 mod framing_fields;
 mod girder_svg;
 mod live_card;
 mod observation_list;
 mod path_fields;
 mod photos;
+mod question_card;
 mod remove_button;
 mod side_view;
 mod status_badge;
+mod tape_input;
 
+pub use autosave_fields::AutosaveFields;
 pub use framing_fields::{FieldChange, FramingFields};
 pub use girder_svg::GirderSvg;
 pub use live_card::LiveCard;
 pub use observation_list::ObservationList;
 pub use path_fields::{PathChange, PathFields};
 pub use photos::Photos;
+pub use question_card::QuestionCard;
 pub use remove_button::RemoveButton;
 pub use side_view::SideViewSvg;
 pub use status_badge::StatusBadge;
+pub use tape_input::{pressed, TapeInput, TapeState};

@@ -1,8 +1,10 @@
 //! The fields of a girder line, a post or an area's conditions: picks for what can be picked,
 //! lengths typed as a tape reads, yes/no/not recorded; each field's error directly under it.
 
+use super::TapeInput;
 use dioxus::prelude::*;
 use undercroft_core::forms::{FieldError, PathField, PathFieldType};
+use undercroft_core::units::{bare_number_hint, UnitSystem};
 
 /// A field changed: its name and its new text.
 pub type PathChange = (&'static str, String);
@@ -15,6 +17,9 @@ pub fn PathFields(
     /// Each field's text, in the order of `fields`.
     values: Vec<String>,
     errors: Vec<FieldError>,
+    /// Metric inspections get the millimetre keypad.
+    #[props(default)]
+    metric: bool,
     on_change: EventHandler<PathChange>,
 ) -> Element {
     rsx! {
@@ -25,6 +30,7 @@ pub fn PathFields(
                 field: *field,
                 value,
                 error: errors.iter().find(|e| e.field == field.name).map(|e| e.message.clone()),
+                metric,
                 on_change,
             }
         }
@@ -37,13 +43,14 @@ fn PathInput(
     field: PathField,
     value: String,
     error: Option<String>,
+    metric: bool,
     on_change: EventHandler<PathChange>,
 ) -> Element {
     let name = field.name;
     let control = match field.kind {
         PathFieldType::Choice(picks) => rsx! {
             select { id: "{id}", onchange: move |e| on_change.call((name, e.value())),
-                option { value: "", selected: value.is_empty(), "Not recorded" }
+                option { value: "", selected: value.is_empty(), "{field.empty}" }
                 for (key, text) in picks.iter() {
                     option { value: "{key}", selected: value == *key, "{text}" }
                 }
@@ -51,7 +58,7 @@ fn PathInput(
         },
         PathFieldType::YesNo => rsx! {
             select { id: "{id}", onchange: move |e| on_change.call((name, e.value())),
-                option { value: "", selected: value.is_empty(), "Not recorded" }
+                option { value: "", selected: value.is_empty(), "{field.empty}" }
                 option { value: "yes", selected: value == "yes", "Yes" }
                 option { value: "no", selected: value == "no", "No" }
             }
@@ -84,14 +91,28 @@ fn PathInput(
                 }
             }
         }
+        PathFieldType::Date => rsx! {
+            input { id: "{id}", r#type: "date", value: "{value}",
+                oninput: move |e| on_change.call((name, e.value())) }
+        },
+        PathFieldType::Short | PathFieldType::Long => {
+            let units = if metric {
+                UnitSystem::Metric
+            } else {
+                UnitSystem::Imperial
+            };
+            rsx! {
+                TapeInput { id: id.clone(), value, placeholder: bare_number_hint(units), metric,
+                    on_input: move |text| on_change.call((name, text)) }
+            }
+        }
         kind => {
             let inputmode = match kind {
                 PathFieldType::Number { .. } | PathFieldType::Count { .. } => "decimal",
                 _ => "text",
             };
             let hint = match kind {
-                PathFieldType::Short => "inches if no unit",
-                PathFieldType::Long | PathFieldType::Lengths => "feet if no unit",
+                PathFieldType::Lengths => "15' 6\", 31' 0\"",
                 _ => "",
             };
             rsx! {

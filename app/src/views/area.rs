@@ -2,11 +2,13 @@
 //! one's values), a single member or a girder line; the conditions of the space, saved as
 //! they are picked.
 
-use crate::components::{PathChange, PathFields, Photos};
+use crate::components::{AutosaveFields, PathChange, Photos};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{field_text, site_with, FieldError, SITE_FIELDS};
-use undercroft_core::model::{GirderKind, GirderLine, JoistRun, Member};
+use undercroft_core::forms::{
+    area_with, field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS,
+};
+use undercroft_core::model::{Area, GirderKind, GirderLine, JoistRun, Member};
 use undercroft_core::store::new_id;
 
 #[component]
@@ -24,42 +26,42 @@ pub fn AreaView(id: String) -> Element {
     };
     let previous = area.runs.last().map(|r| r.framing.clone());
     let units = inspection.units;
-    let mut site_texts = use_signal(|| {
-        SITE_FIELDS
-            .iter()
-            .map(|f| field_text(&area.conditions, f, units))
-            .collect::<Vec<_>>()
-    });
-    let mut site_errors = use_signal(Vec::<FieldError>::new);
-    let save_site = {
+    let site_texts: Vec<String> = SITE_FIELDS
+        .iter()
+        .map(|f| field_text(&area.conditions, f, units))
+        .collect();
+    let own_texts: Vec<String> = AREA_FIELDS
+        .iter()
+        .map(|f| field_text(&area, f, units))
+        .collect();
+    // Both sets save the same way: the stored area read fresh, one field changed, rewritten.
+    let save_area = {
         let app = app.clone();
         let id = id.clone();
-        use_callback(move |(name, text): PathChange| {
-            if let Some(i) = SITE_FIELDS.iter().position(|f| f.name == name) {
-                site_texts.write()[i] = text.clone();
-            }
-            let Some(mut current) = app
+        move |change: &dyn Fn(&Area) -> Result<Area, FieldError>| {
+            let current = app
                 .inspection_holding(&id)
                 .and_then(|i| i.area(&id).cloned())
-            else {
-                return;
-            };
-            let mut errs: Vec<FieldError> = Vec::new();
-            match site_with(&current.conditions, name, &text, units) {
-                Ok(conditions) => {
-                    current.conditions = conditions;
-                    if let Err(message) = app.change(|s| s.update_area(&current)) {
-                        errs.push(FieldError {
-                            field: "save",
-                            message,
-                        });
-                    }
-                }
-                Err(e) => errs.push(e),
-            }
-            site_errors.set(errs);
+                .ok_or_else(|| not_saved("this area is no longer in the store".into()))?;
+            let next = change(&current)?;
+            app.change(|s| s.update_area(&next)).map_err(not_saved)
+        }
+    };
+    let save_site = {
+        let save_area = save_area.clone();
+        use_callback(move |(name, text): PathChange| {
+            save_area(&|a: &Area| {
+                let conditions = site_with(&a.conditions, name, &text, units)?;
+                Ok(Area {
+                    conditions,
+                    ..a.clone()
+                })
+            })
         })
     };
+    let save_own = use_callback(move |(name, text): PathChange| {
+        save_area(&|a: &Area| area_with(a, name, &text, units))
+    });
     let mut girder_label = use_signal(String::new);
     let add_girder = {
         let app = app.clone();
@@ -171,9 +173,10 @@ pub fn AreaView(id: String) -> Element {
             }
             button { id: "add-run", onclick: add, "Add run" }
             h2 { "The space under the floor" }
-            PathFields { prefix: "site", fields: SITE_FIELDS, values: site_texts(), errors: site_errors(), on_change: save_site }
-            for e in site_errors().iter().filter(|e| e.field == "save") {
-                p { class: "field-error", "Not saved: {e.message}" }
+            AutosaveFields { prefix: "site", fields: SITE_FIELDS, initial: site_texts, save: save_site }
+            details { id: "about-area",
+                summary { "About this area: name, kind, loads, notes" }
+                AutosaveFields { prefix: "area", fields: AREA_FIELDS, initial: own_texts, save: save_own }
             }
             Photos { owner: id.clone() }
         }
@@ -186,5 +189,13 @@ fn label_or(typed: String, default: &str) -> String {
         default.to_string()
     } else {
         typed
+    }
+}
+
+/// A save the store refused, said under the fields.
+fn not_saved(message: String) -> FieldError {
+    FieldError {
+        field: "save",
+        message,
     }
 }

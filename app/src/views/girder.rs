@@ -11,7 +11,7 @@ use undercroft_core::forms::{
 use undercroft_core::model::Post;
 use undercroft_core::report::girder_view_of;
 use undercroft_core::store::new_id;
-use undercroft_core::units::parse_length;
+use undercroft_core::units::{bare_number_hint, parse_typed_length};
 
 #[component]
 pub fn GirderScreen(id: String) -> Element {
@@ -91,11 +91,7 @@ pub fn GirderScreen(id: String) -> Element {
         let app = app.clone();
         let line = line.clone();
         move |_| {
-            let bare = match units {
-                undercroft_core::units::UnitSystem::Metric => 1.0 / 25.4,
-                undercroft_core::units::UnitSystem::Imperial => 12.0,
-            };
-            let at = match parse_length(&position(), Some(bare)) {
+            let at = match parse_typed_length(&position(), units) {
                 Ok(at) => at,
                 Err(e) => {
                     post_error.set(Some(format!("Distance from end A: {e}")));
@@ -145,7 +141,7 @@ pub fn GirderScreen(id: String) -> Element {
                 }
             }
             label { r#for: "post-at", "A post at this distance from end A" }
-            input { id: "post-at", inputmode: "text", placeholder: "feet if no unit", value: "{position}", oninput: move |e| position.set(e.value()) }
+            input { id: "post-at", inputmode: "text", placeholder: "{bare_number_hint(units)}", value: "{position}", oninput: move |e| position.set(e.value()) }
             if let Some(e) = post_error() {
                 p { class: "field-error", role: "alert", "{e}" }
             }

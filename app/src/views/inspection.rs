@@ -1,7 +1,9 @@
 //! One inspection: its areas, each with a count of what is over a limit; add an area.
 
+use crate::components::{AutosaveFields, PathChange};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
+use undercroft_core::forms::{field_text, inspection_with, FieldError, INSPECTION_FIELDS};
 use undercroft_core::model::{Area, AreaKind};
 use undercroft_core::store::new_id;
 use undercroft_core::Status;
@@ -17,6 +19,28 @@ pub fn InspectionView(id: String) -> Element {
         return rsx! { main { p { "This inspection is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
     };
     let evaluation = app.evaluation(&inspection);
+    let header_texts: Vec<String> = INSPECTION_FIELDS
+        .iter()
+        .map(|f| field_text(&inspection, f, inspection.units))
+        .collect();
+    let save_header = {
+        let app = app.clone();
+        let id = id.clone();
+        use_callback(move |(name, text): PathChange| {
+            let not_saved = |message: String| FieldError {
+                field: "save",
+                message,
+            };
+            // Read fresh, so quick changes build on each other.
+            let current = app
+                .store
+                .borrow()
+                .load_inspection(&id)
+                .map_err(|e| not_saved(e.to_string()))?;
+            let next = inspection_with(&current, name, &text)?;
+            app.change(|s| s.update_header(&next)).map_err(not_saved)
+        })
+    };
     let over_in = |area_id: &str| {
         evaluation
             .findings
@@ -106,6 +130,10 @@ pub fn InspectionView(id: String) -> Element {
                 p { class: "field-error", "{e}" }
             }
             button { id: "add-area", onclick: add, "Add area" }
+            details { id: "about-inspection",
+                summary { "About this inspection: client, date, code edition, loads" }
+                AutosaveFields { prefix: "inspection", fields: INSPECTION_FIELDS, initial: header_texts, save: save_header }
+            }
             h2 { "This inspection" }
             if archived {
                 p { class: "status", "Archived: hidden from the list of inspections." }

@@ -4,10 +4,11 @@
 use crate::components::{
     FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
 };
-use crate::edits::FramingOwner;
+use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FramingForm};
+use undercroft_core::units::UnitSystem;
 
 #[component]
 pub fn MemberView(id: String) -> Element {
@@ -32,7 +33,7 @@ pub fn MemberView(id: String) -> Element {
         .map(|r| FramingForm::from_framing(&r.framing, units));
     let mut form = use_signal(|| FramingForm::from_framing(&stored, units));
     let mut label = use_signal(|| stored_label.clone());
-    let mut errors = use_signal(Vec::new);
+    let mut check_of_fields = use_signal(FieldCheck::default);
     let loads = area.loads.resolve(&inspection.loads);
     // A joist is checked with the run's values where it lists none of its own.
     let mut effective = form();
@@ -42,21 +43,38 @@ pub fn MemberView(id: String) -> Element {
     let check = live_check(&effective, &loads, units);
     let member_id = id.clone();
     let save_app = app.clone();
-    let save = use_callback(move |(field, value): FieldChange| {
-        let (field, value) = if field == "label" {
-            label.set(value);
-            // The label is saved with the framing as it stands.
-            ("", String::new())
-        } else {
-            (field, value)
-        };
-        let name = label();
-        let owner = FramingOwner::Member {
-            id: &member_id,
-            label: &name,
-        };
-        errors.set(save_app.save_framing(owner, &mut form.write(), &stored, units, (field, value)));
-    });
+    let run_framing = run.as_ref().map(|r| r.framing.clone());
+    let save_with = use_callback(
+        move |(field, value, confirmed): (&'static str, String, bool)| {
+            let (field, value) = if field == "label" {
+                label.set(value);
+                // The label is saved with the framing as it stands.
+                ("", String::new())
+            } else {
+                (field, value)
+            };
+            let name = label();
+            let owner = FramingOwner::Member {
+                id: &member_id,
+                label: &name,
+                run: run_framing.as_ref(),
+            };
+            let edit = FramingEdit {
+                field,
+                value,
+                confirmed,
+            };
+            check_of_fields.set(save_app.save_framing(
+                owner,
+                &mut form.write(),
+                &stored,
+                units,
+                edit,
+            ));
+        },
+    );
+    let save = move |(field, value): FieldChange| save_with.call((field, value, false));
+    let keep = move |(field, value): FieldChange| save_with.call((field, value, true));
     let up = match &run {
         Some(r) => Route::RunView { id: r.id.clone() },
         None => Route::AreaView {
@@ -81,10 +99,10 @@ pub fn MemberView(id: String) -> Element {
             }
             LiveCard { check }
             label { r#for: "member-label", "Label" }
-            input { id: "member-label", value: "{label}", oninput: move |e| save.call(("label", e.value())) }
-            FramingFields { form: form(), base, on_change: save }
-            for e in errors() {
-                p { class: "field-error", "{e.field}: {e.message}" }
+            input { id: "member-label", value: "{label}", oninput: move |e| save_with.call(("label", e.value(), false)) }
+            FramingFields { form: form(), base, check: check_of_fields(), metric: units == UnitSystem::Metric, on_change: save, on_keep: keep }
+            for e in check_of_fields().errors.iter().filter(|e| e.field == "save") {
+                p { class: "field-error", role: "alert", "Not saved: {e.message}" }
             }
             h2 { "What was seen on it" }
             ObservationList { owner: id.clone(), observations, units }

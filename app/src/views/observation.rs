@@ -1,12 +1,13 @@
 //! One observation: its fields laid out from core's field list, saved the moment they read,
 //! with the verdict and citation and the member's side view updating as it is typed.
 
-use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge};
+use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge, TapeInput};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
     fields_of, preview_observation, side_view_with, FieldType, ObservationForm, KINDS,
 };
+use undercroft_core::units::{bare_number_hint, UnitSystem};
 
 #[component]
 pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
@@ -120,14 +121,22 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
                         input { id: "{spec.name}", inputmode: "decimal", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
                     },
                     FieldType::Short | FieldType::Long => rsx! {
-                        input { id: "{spec.name}", inputmode: "text", autocomplete: "off", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
+                        TapeInput { id: spec.name, value: f.value(spec.name).to_string(), placeholder: bare_number_hint(units), metric: units == UnitSystem::Metric,
+                            on_input: move |text| save.call((spec.name, text)) }
                     },
+                }
+                for e in errors().iter().filter(|e| e.field == spec.name) {
+                    if e.message.ends_with("is needed") {
+                        p { class: "field-needed", "Needed to save it" }
+                    } else {
+                        p { class: "field-error", role: "alert", "{e.message}" }
+                    }
                 }
             }
             label { r#for: "note", "Note" }
             textarea { id: "note", value: "{f.note}", oninput: move |e| save.call(("note", e.value())) }
-            for e in errors() {
-                p { class: "field-error", "{e.field}: {e.message}" }
+            for e in errors().iter().filter(|e| !specs.iter().any(|s| s.name == e.field)) {
+                p { class: "field-error", role: "alert", "{e.message}" }
             }
             if exists {
                 Photos { owner: id.clone() }

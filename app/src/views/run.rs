@@ -4,12 +4,13 @@
 use crate::components::{
     FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
 };
-use crate::edits::FramingOwner;
+use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{live_check, FramingForm};
 use undercroft_core::model::Joist;
 use undercroft_core::store::new_id;
+use undercroft_core::units::UnitSystem;
 
 #[component]
 pub fn RunView(id: String) -> Element {
@@ -24,7 +25,7 @@ pub fn RunView(id: String) -> Element {
     let units = inspection.units;
     let stored = run.framing.clone();
     let mut form = use_signal(|| FramingForm::from_framing(&stored, units));
-    let mut errors = use_signal(Vec::new);
+    let mut check_of_fields = use_signal(FieldCheck::default);
     let loads = area.loads.resolve(&inspection.loads);
     let check = live_check(&form(), &loads, units);
     let run_id = id.clone();
@@ -32,13 +33,27 @@ pub fn RunView(id: String) -> Element {
     // Every change is saved the moment it is made; a field that does not read yet keeps its
     // stored value.
     let save_app = app.clone();
-    let save = use_callback(move |change: FieldChange| {
+    let save_with = use_callback(move |edit: FramingEdit| {
         let owner = FramingOwner::Run {
             id: &run_id,
             label: &label,
         };
-        errors.set(save_app.save_framing(owner, &mut form.write(), &stored, units, change));
+        check_of_fields.set(save_app.save_framing(owner, &mut form.write(), &stored, units, edit));
     });
+    let save = move |(field, value): FieldChange| {
+        save_with.call(FramingEdit {
+            field,
+            value,
+            confirmed: false,
+        })
+    };
+    let keep = move |(field, value): FieldChange| {
+        save_with.call(FramingEdit {
+            field,
+            value,
+            confirmed: true,
+        })
+    };
     let add_joist = {
         let app = app.clone();
         let run_id = id.clone();
@@ -110,9 +125,9 @@ pub fn RunView(id: String) -> Element {
                     p { class: "field-error", role: "alert", "{e}" }
                 }
             }
-            FramingFields { form: form(), base: None, on_change: save }
-            for e in errors() {
-                p { class: "field-error", "{e.field}: {e.message}" }
+            FramingFields { form: form(), base: None, check: check_of_fields(), metric: units == UnitSystem::Metric, on_change: save, on_keep: keep }
+            for e in check_of_fields().errors.iter().filter(|e| e.field == "save") {
+                p { class: "field-error", role: "alert", "Not saved: {e.message}" }
             }
             h2 { "What was seen on these joists" }
             ObservationList { owner: id.clone(), observations: run.observations.clone(), units }

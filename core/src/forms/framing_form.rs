@@ -5,7 +5,7 @@ use crate::model::{
     ActualSize, Bearing, BearingSupport, Bridging, BridgingKind, EndRestraint, Framing, MemberKind,
     RoomUse,
 };
-use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, parse_typed_length, Length, UnitSystem};
 use serde::{Deserialize, Serialize};
 
 /// One field's problem, named so the screen can show it beside the field.
@@ -27,11 +27,11 @@ pub struct FramingForm {
     pub size: String,
     /// Measured section for rough-sawn lumber, such as `2 x 10`.
     pub actual: String,
-    /// Inches when no unit is typed (mm in metric).
+    /// As a tape reads; a bare number is inches (mm in metric).
     pub spacing: String,
-    /// Feet when no unit is typed (mm in metric): `15' 2"`, `15-2`, `15`.
+    /// As a tape reads: `15' 2"`, `15-2`, `15'`; a bare number is inches (see `units::typed`).
     pub clear_span: String,
-    /// Inches when no unit is typed (mm in metric).
+    /// As a tape reads; a bare number is inches (mm in metric).
     pub bearing_length: String,
     /// `wood`, `metal`, `masonry`, `concrete`, `hanger`, `ribbon`, `ledger`.
     pub bearing_on: String,
@@ -39,22 +39,12 @@ pub struct FramingForm {
     pub end_restraint: String,
     /// `none`, `solid-blocking`, `diagonal`, `strap`.
     pub bridging: String,
-    /// Feet when no unit is typed (mm in metric).
+    /// As a tape reads; a bare number is inches (mm in metric).
     pub bridging_interval: String,
     /// Where the room above differs from its area's: `sleeping`, `living`; empty inherits.
     pub room_use_above: String,
     /// Where the finishes differ from the area's: `light`, `heavy`; empty inherits.
     pub finishes: String,
-}
-
-/// Inches per unit assumed for a bare number in a field: short lengths in inches, spans in
-/// feet; millimetres in metric.
-fn bare_unit(units: UnitSystem, long: bool) -> f64 {
-    match (units, long) {
-        (UnitSystem::Metric, _) => 1.0 / 25.4,
-        (UnitSystem::Imperial, true) => 12.0,
-        (UnitSystem::Imperial, false) => 1.0,
-    }
 }
 
 fn enum_from<T: serde::de::DeserializeOwned>(text: &str) -> Option<T> {
@@ -66,6 +56,26 @@ fn enum_text<T: Serialize>(value: &T) -> String {
         .ok()
         .and_then(|v| v.as_str().map(str::to_string))
         .unwrap_or_default()
+}
+
+/// Puts back the stored value of one field (by its form name) into `framing`: for a field
+/// that does not read, or whose value waits on the inspector's answer to a question.
+pub fn keep_stored(framing: &mut Framing, stored: &Framing, field: &str) {
+    match field {
+        "kind" => framing.kind = stored.kind,
+        "species" => framing.species = stored.species,
+        "grade" => framing.grade = stored.grade,
+        "size" => framing.size = stored.size,
+        "actual" => framing.actual = stored.actual,
+        "spacing" => framing.spacing = stored.spacing,
+        "clear_span" => framing.clear_span = stored.clear_span,
+        "bearing_length" | "bearing_on" => framing.bearing = stored.bearing,
+        "end_restraint" => framing.end_restraint = stored.end_restraint,
+        "bridging" | "bridging_interval" => framing.bridging = stored.bridging,
+        "room_use_above" => framing.loads.room_use_above = stored.loads.room_use_above,
+        "finishes" => framing.loads.heavy_finish = stored.loads.heavy_finish,
+        _ => {}
+    }
 }
 
 impl FramingForm {
@@ -155,11 +165,11 @@ impl FramingForm {
                 Err(e) => fail("actual", e.to_string()),
             }
         }
-        let mut length = |field: &'static str, text: &str, long: bool| -> Option<Length> {
+        let mut length = |field: &'static str, text: &str| -> Option<Length> {
             if !filled(text) {
                 return None;
             }
-            match parse_length(text, Some(bare_unit(units, long))) {
+            match parse_typed_length(text, units) {
                 Ok(l) => Some(l),
                 Err(e) => {
                     fail(field, e.to_string());
@@ -167,10 +177,10 @@ impl FramingForm {
                 }
             }
         };
-        framing.spacing = length("spacing", &self.spacing, false);
-        framing.clear_span = length("clear_span", &self.clear_span, true);
-        let bearing_length = length("bearing_length", &self.bearing_length, false);
-        let interval = length("bridging_interval", &self.bridging_interval, true);
+        framing.spacing = length("spacing", &self.spacing);
+        framing.clear_span = length("clear_span", &self.clear_span);
+        let bearing_length = length("bearing_length", &self.bearing_length);
+        let interval = length("bridging_interval", &self.bridging_interval);
         if filled(&self.bearing_on) {
             match enum_from::<BearingSupport>(&self.bearing_on) {
                 Some(on) => {
@@ -252,21 +262,7 @@ impl FramingForm {
     pub fn merged_with(&self, stored: &Framing, units: UnitSystem) -> (Framing, Vec<FieldError>) {
         let (mut framing, errors) = self.to_framing(units);
         for e in &errors {
-            match e.field {
-                "kind" => framing.kind = stored.kind,
-                "species" => framing.species = stored.species,
-                "grade" => framing.grade = stored.grade,
-                "size" => framing.size = stored.size,
-                "actual" => framing.actual = stored.actual,
-                "spacing" => framing.spacing = stored.spacing,
-                "clear_span" => framing.clear_span = stored.clear_span,
-                "bearing_length" | "bearing_on" => framing.bearing = stored.bearing,
-                "end_restraint" => framing.end_restraint = stored.end_restraint,
-                "bridging" | "bridging_interval" => framing.bridging = stored.bridging,
-                "room_use_above" => framing.loads.room_use_above = stored.loads.room_use_above,
-                "finishes" => framing.loads.heavy_finish = stored.loads.heavy_finish,
-                _ => {}
-            }
+            keep_stored(&mut framing, stored, e.field);
         }
         // Loads the form does not show (a typed live or dead load from a file) are kept.
         framing.loads.live_psf = stored.loads.live_psf;
@@ -345,7 +341,7 @@ mod tests {
     }
 
     #[test]
-    fn bare_numbers_take_the_fields_unit() {
+    fn a_bare_number_is_inches_in_every_length_field() {
         let form = FramingForm {
             clear_span: "15-2".into(),
             spacing: "19.2".into(),
@@ -354,12 +350,12 @@ mod tests {
         let (f, _) = form.to_framing(UnitSystem::Imperial);
         assert_eq!(f.clear_span, Some(Length::inches(182.0)));
         let form = FramingForm {
-            clear_span: "15".into(),
+            clear_span: "182".into(),
             ..Default::default()
         };
         assert_eq!(
             form.to_framing(UnitSystem::Imperial).0.clear_span,
-            Some(Length::inches(180.0))
+            Some(Length::inches(182.0))
         );
         let metric = FramingForm {
             clear_span: "4150".into(),

@@ -3,13 +3,18 @@
 //! is being typed. No UI code: the app's components only read and call these.
 
 mod framing_form;
+mod header_form;
 mod live_check;
 mod observation_form;
 mod path_form;
 mod picks;
+mod plausible;
 mod preview;
 
-pub use framing_form::{FieldError, FramingForm};
+pub use framing_form::{keep_stored, FieldError, FramingForm};
+pub use header_form::{
+    area_with, inspection_with, AREA_FIELDS, AREA_KINDS, CODE_EDITIONS, INSPECTION_FIELDS,
+};
 pub use live_check::{live_check, LiveCheck};
 pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};
 pub use path_form::{
@@ -19,4 +24,5 @@ pub use path_form::{
 pub use picks::{
     BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS, ROOM_USES, SIZES, SPECIES,
 };
+pub use plausible::{framing_question, Question};
 pub use preview::{preview_observation, side_view_of, side_view_with};

@@ -3,7 +3,7 @@
 
 use super::FieldError;
 use crate::model::{Observation, ObservationKind};
-use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, parse_typed_length, Length, UnitSystem};
 use crate::validate::observation_problem;
 use serde_json::{Map, Value};
 use std::collections::BTreeMap;
@@ -14,7 +14,7 @@ use std::sync::Arc;
 pub enum FieldType {
     /// A short length, inches when no unit is typed (a notch depth).
     Short,
-    /// A position or span, feet when no unit is typed.
+    /// A position or span (feet with their mark; see `units::typed`).
     Long,
     /// Percent, a plain number.
     Percent,
@@ -348,11 +348,6 @@ impl ObservationForm {
         let mut errors = Vec::new();
         let mut object = Map::new();
         object.insert("kind".into(), Value::String(self.kind.clone()));
-        let bare = |long: bool| match (units, long) {
-            (UnitSystem::Metric, _) => 1.0 / 25.4,
-            (UnitSystem::Imperial, true) => 12.0,
-            (UnitSystem::Imperial, false) => 1.0,
-        };
         for spec in specs {
             let text = self.value(spec.name).trim();
             if text.is_empty() {
@@ -365,11 +360,9 @@ impl ObservationForm {
                 continue;
             }
             let value = match spec.kind {
-                FieldType::Short | FieldType::Long => {
-                    parse_length(text, Some(bare(spec.kind == FieldType::Long)))
-                        .map(|l| Value::from(l.in_inches()))
-                        .map_err(|e| e.to_string())
-                }
+                FieldType::Short | FieldType::Long => parse_typed_length(text, units)
+                    .map(|l| Value::from(l.in_inches()))
+                    .map_err(|e| e.to_string()),
                 FieldType::Percent => text
                     .trim_end_matches('%')
                     .trim()
@@ -443,10 +436,6 @@ impl ObservationForm {
 
 /// "7' 7", 5/8"" per line -> [{at, offset}] in inches.
 fn readings(text: &str, units: UnitSystem) -> Result<Vec<Value>, String> {
-    let (long, short) = match units {
-        UnitSystem::Metric => (1.0 / 25.4, 1.0 / 25.4),
-        UnitSystem::Imperial => (12.0, 1.0),
-    };
     text.lines()
         .filter(|l| !l.trim().is_empty())
         .enumerate()
@@ -454,9 +443,9 @@ fn readings(text: &str, units: UnitSystem) -> Result<Vec<Value>, String> {
             let (at, offset) = line
                 .split_once([',', ';'])
                 .ok_or_else(|| format!("line {}: write \"distance, offset\"", n + 1))?;
-            let at = parse_length(at, Some(long))
+            let at = parse_typed_length(at, units)
                 .map_err(|e| format!("line {}: distance: {e}", n + 1))?;
-            let offset = parse_length(offset, Some(short))
+            let offset = parse_typed_length(offset, units)
                 .map_err(|e| format!("line {}: offset: {e}", n + 1))?;
             let mut row = Map::new();
             row.insert("at".into(), Value::from(at.in_inches()));
@@ -486,7 +475,7 @@ mod tests {
                 ("edge", "bottom"),
                 ("depth", "2"),
                 ("length", "3-1/2"),
-                ("from_support", "3"),
+                ("from_support", "3'"),
             ],
         );
         let o = f

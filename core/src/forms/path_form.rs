@@ -3,7 +3,7 @@
 
 use super::FieldError;
 use crate::model::{GirderLine, Post, SiteConditions};
-use crate::units::{format_dimension, format_length, parse_length, Length, UnitSystem};
+use crate::units::{format_dimension, format_length, parse_typed_length, Length, UnitSystem};
 use serde::de::DeserializeOwned;
 use serde::Serialize;
 use serde_json::{Map, Value};
@@ -12,9 +12,13 @@ use serde_json::{Map, Value};
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub enum PathFieldType {
     Text,
+    /// Text that must not be left empty (an address, an area's name).
+    Required,
+    /// A visit date, `YYYY-MM-DD`.
+    Date,
     /// A short length: inches when no unit is typed (mm in metric).
     Short,
-    /// A position or length along a girder: feet when no unit is typed.
+    /// A position or length along a girder (feet with their mark; see `units::typed`).
     Long,
     /// A plain number within bounds, with its unit for the label.
     Number {
@@ -41,10 +45,24 @@ pub struct PathField {
     pub name: &'static str,
     pub label: &'static str,
     pub kind: PathFieldType,
+    /// What the empty choice of a pick reads: "Not recorded" unless given.
+    pub empty: &'static str,
 }
 
-const fn f(name: &'static str, label: &'static str, kind: PathFieldType) -> PathField {
-    PathField { name, label, kind }
+pub(super) const fn f(name: &'static str, label: &'static str, kind: PathFieldType) -> PathField {
+    PathField {
+        name,
+        label,
+        kind,
+        empty: "Not recorded",
+    }
+}
+
+impl PathField {
+    /// The same field with another text for its empty choice.
+    pub(super) const fn empty_reads(self, empty: &'static str) -> PathField {
+        PathField { empty, ..self }
+    }
 }
 
 pub const GIRDER_KINDS: &[(&str, &str)] = &[
@@ -332,7 +350,10 @@ pub fn field_text<T: Serialize>(item: &T, field: &PathField, units: UnitSystem) 
             .join(","),
         (PathFieldType::YesNo, Value::Bool(b)) => if *b { "yes" } else { "no" }.into(),
         (_, Value::String(s)) => s.clone(),
-        (_, Value::Number(n)) => n.to_string(),
+        (_, Value::Number(n)) => match n.as_f64() {
+            Some(x) if x.fract() == 0.0 && x.abs() < 1e15 => format!("{}", x as i64),
+            _ => n.to_string(),
+        },
         _ => String::new(),
     }
 }
@@ -357,25 +378,30 @@ pub fn with_field<T: Serialize + DeserializeOwned>(
         message,
     };
     let text = text.trim();
-    let bare = |long: bool| match (units, long) {
-        (UnitSystem::Metric, _) => 1.0 / 25.4,
-        (UnitSystem::Imperial, true) => 12.0,
-        (UnitSystem::Imperial, false) => 1.0,
-    };
-    let length = |t: &str, long: bool| {
-        parse_length(t, Some(bare(long)))
+    let length = |t: &str, _long: bool| {
+        parse_typed_length(t, units)
             .map(|l| Value::from(l.in_inches()))
             .map_err(|e| error(e.to_string()))
     };
     let value: Option<Value> = if text.is_empty() {
         match field.kind {
             PathFieldType::Text => Some(Value::String(String::new())),
+            PathFieldType::Required => {
+                return Err(error(format!("{} cannot be left empty", field.label)))
+            }
+            PathFieldType::Date => {
+                return Err(error("the date of the visit cannot be left empty".into()))
+            }
             PathFieldType::Lengths | PathFieldType::Many(_) => Some(Value::Array(vec![])),
             _ => None,
         }
     } else {
         Some(match field.kind {
-            PathFieldType::Text => Value::String(text.to_string()),
+            PathFieldType::Text | PathFieldType::Required => Value::String(text.to_string()),
+            PathFieldType::Date => {
+                crate::model::check_date(text).map_err(error)?;
+                Value::String(text.to_string())
+            }
             PathFieldType::Short => length(text, false)?,
             PathFieldType::Long => length(text, true)?,
             PathFieldType::Lengths => Value::Array(
@@ -554,10 +580,12 @@ mod tests {
     }
 
     #[test]
-    fn a_bare_number_is_feet_along_the_girder_and_inches_across_it() {
+    fn a_bare_number_is_inches_along_the_girder_and_across_it() {
         let line = demo_line();
         let u = UnitSystem::Imperial;
-        let changed = girder_with(&line, "length", "24", u).unwrap();
+        let changed = girder_with(&line, "length", "288", u).unwrap();
+        assert_eq!(changed.length, Some(Length::inches(288.0)));
+        let changed = girder_with(&line, "length", "24'", u).unwrap();
         assert_eq!(changed.length, Some(Length::inches(288.0)));
         let changed = girder_with(&line, "end_a.length", "4", u).unwrap();
         assert_eq!(changed.end_a.unwrap().length, Some(Length::inches(4.0)));
@@ -575,7 +603,7 @@ mod tests {
         assert!(girder_with(&line, "wall_above_plf", "NaN", u).is_err());
         assert!(girder_with(&line, "kind", "timber", u).is_err());
         let post = &line.posts[0];
-        let e = post_with(&line, post, "at", "30", u).unwrap_err();
+        let e = post_with(&line, post, "at", "30'", u).unwrap_err();
         assert!(e.message.contains("beyond the girder"), "{}", e.message);
         let shimmed = post_with(&line, post, "conditions", "shimmed,leaning", u).unwrap();
         assert_eq!(

@@ -4,6 +4,7 @@ mod length;
 mod length_format;
 mod length_parse;
 mod load;
+mod typed;
 
 pub use length::Length;
 pub use length_format::{
@@ -11,3 +12,4 @@ pub use length_format::{
 };
 pub use length_parse::{parse_length, LengthError};
 pub use load::{Psf, Psi};
+pub use typed::{bare_number_hint, bare_number_inches, parse_typed_length};
