@@ -40,6 +40,7 @@ fn inspection(joists: usize) -> Inspection {
         run.joists.push(Joist {
             id: format!("j{n}"),
             label: format!("Joist {}", n + 1),
+            at: None,
             framing: Framing::default(),
             observations: vec![Observation {
                 id: format!("n{n}").into(),

@@ -56,6 +56,7 @@ pub fn inspection_with_members(members: usize) -> Inspection {
                     Joist {
                         id: id.clone(),
                         label: format!("Joist {j}"),
+                        at: None,
                         framing: Framing::default(),
                         observations: observations(&id, span, j),
                     }

@@ -137,6 +137,7 @@ fn run_with_joist(
         joists: vec![Joist {
             id: "j".into(),
             label: "Joist 3".into(),
+            at: None,
             framing: Default::default(),
             observations: joist_obs,
         }],

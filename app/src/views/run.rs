@@ -62,6 +62,7 @@ pub fn RunView(id: String) -> Element {
             let joist = Joist {
                 id: new_id(),
                 label: format!("Joist {next}"),
+                at: None,
                 framing: Default::default(),
                 observations: vec![],
             };

@@ -255,6 +255,10 @@ pub struct JoistRun {
 pub struct Joist {
     pub id: String,
     pub label: String,
+    /// Where the joist is, measured along the run from its start (the wall the inspector
+    /// began at); unset for a joist entered by label only.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub at: Option<crate::units::Length>,
     /// Only the fields that differ from the run.
     #[serde(default)]
     pub framing: Framing,

@@ -4,8 +4,9 @@ use super::{Result, Store, StoreError};
 use crate::model::*;
 use rusqlite::{params, OptionalExtension};
 
-/// A joist's or single member's stored parts: id, label, framing, observations.
-type StoredMember = (String, String, Framing, Vec<Observation>);
+/// A joist's or single member's stored parts: id, label, framing, observations, and a
+/// joist's place along its run.
+type StoredMember = (String, String, Framing, Vec<Observation>, Option<f64>);
 
 impl Store {
     /// The whole inspection as the engine's model (and the interchange format).
@@ -97,7 +98,7 @@ impl Store {
                     members: self
                         .members(&id, None)?
                         .into_iter()
-                        .map(|(id, label, framing, observations)| Member {
+                        .map(|(id, label, framing, observations, _)| Member {
                             id,
                             label,
                             framing,
@@ -130,9 +131,10 @@ impl Store {
                     joists: self
                         .members(area_id, Some(&id))?
                         .into_iter()
-                        .map(|(id, label, framing, observations)| Joist {
+                        .map(|(id, label, framing, observations, at)| Joist {
                             id,
                             label,
+                            at: at.map(crate::units::Length::inches),
                             framing,
                             observations,
                         })
@@ -175,17 +177,17 @@ impl Store {
     /// Members of an area: the joists of `run_id`, or the single members when None.
     fn members(&self, area_id: &str, run_id: Option<&str>) -> Result<Vec<StoredMember>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT id, label, framing FROM members WHERE area_id = ?1 AND run_id IS ?2 ORDER BY position, id",
+            "SELECT id, label, framing, at_inches FROM members WHERE area_id = ?1 AND run_id IS ?2 ORDER BY position, id",
         )?;
-        let rows: Vec<(String, String, String)> = stmt
+        let rows: Vec<(String, String, String, Option<f64>)> = stmt
             .query_map(params![area_id, run_id], |r| {
-                Ok((r.get(0)?, r.get(1)?, r.get(2)?))
+                Ok((r.get(0)?, r.get(1)?, r.get(2)?, r.get(3)?))
             })?
             .collect::<rusqlite::Result<_>>()?;
         rows.into_iter()
-            .map(|(id, label, framing)| {
+            .map(|(id, label, framing, at)| {
                 let observations = self.observations("member_id", &id)?;
-                Ok((id, label, serde_json::from_str(&framing)?, observations))
+                Ok((id, label, serde_json::from_str(&framing)?, observations, at))
             })
             .collect()
     }

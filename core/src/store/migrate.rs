@@ -31,6 +31,10 @@ const MIGRATIONS: &[Migration] = &[
         sql: include_str!("../../../migrations/0005_finding_priority.sql"),
         after: None,
     },
+    Migration {
+        sql: include_str!("../../../migrations/0006_joist_position.sql"),
+        after: None,
+    },
 ];
 
 /// The `application_id` a store of ours carries from version 3 ("UNDC").

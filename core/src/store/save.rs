@@ -137,16 +137,7 @@ pub fn insert_run(tx: &Transaction, area_id: &str, position: i64, run: &JoistRun
         insert_observation(tx, Owner::Run(&run.id), n as i64, o)?;
     }
     for (n, joist) in run.joists.iter().enumerate() {
-        insert_member(
-            tx,
-            area_id,
-            Some(&run.id),
-            n as i64,
-            &joist.id,
-            &joist.label,
-            &joist.framing,
-            &joist.observations,
-        )?;
+        insert_joist(tx, area_id, &run.id, n as i64, joist)?;
     }
     Ok(())
 }
@@ -221,6 +212,33 @@ pub fn insert_member(
     )?;
     for (n, o) in observations.iter().enumerate() {
         insert_observation(tx, Owner::Member(id), n as i64, o)?;
+    }
+    Ok(())
+}
+
+/// A joist of a run: a member row with the run's id and the joist's place along the run.
+pub fn insert_joist(
+    tx: &Transaction,
+    area_id: &str,
+    run_id: &str,
+    position: i64,
+    joist: &crate::model::Joist,
+) -> Result<()> {
+    insert_member(
+        tx,
+        area_id,
+        Some(run_id),
+        position,
+        &joist.id,
+        &joist.label,
+        &joist.framing,
+        &joist.observations,
+    )?;
+    if let Some(at) = joist.at {
+        tx.execute(
+            "UPDATE members SET at_inches = ?2 WHERE id = ?1",
+            params![joist.id, at.in_inches()],
+        )?;
     }
     Ok(())
 }

@@ -204,6 +204,7 @@ fn edits_inside_an_inspection() {
     let joist = Joist {
         id: new_id(),
         label: "Joist 3".into(),
+        at: None,
         framing: Framing::default(),
         observations: vec![],
     };
@@ -260,6 +261,7 @@ fn edits_inside_an_inspection() {
     let second = Joist {
         id: new_id(),
         label: "Joist 9".into(),
+        at: Some(crate::units::Length::inches(144.0)),
         framing: Framing::default(),
         observations: vec![],
     };
@@ -272,6 +274,15 @@ fn edits_inside_an_inspection() {
         .map(|j| j.label.as_str())
         .collect();
     assert_eq!(labels, ["Joist 9", "Joist 3"]);
+    let placed: Vec<_> = loaded.areas[0].runs[0]
+        .joists
+        .iter()
+        .map(|j| j.at.map(|l| l.in_inches()))
+        .collect();
+    assert_eq!(placed, [Some(144.0), None], "a walked joist keeps its place");
+    let again = crate::interchange::from_json(&crate::interchange::to_json(&loaded))
+        .unwrap();
+    assert_eq!(again, loaded, "and so does its file");
     assert_eq!(
         loaded.areas[0].runs[0].joists[1].observations[0].note,
         "drain line, 2 in PVC"

@@ -146,16 +146,7 @@ impl Store {
                     r.get(0)
                 })?;
             let position = next_position(tx, "members", "run_id = ?1", run_id)?;
-            save::insert_member(
-                tx,
-                &area_id,
-                Some(run_id),
-                position,
-                &joist.id,
-                &joist.label,
-                &joist.framing,
-                &joist.observations,
-            )
+            save::insert_joist(tx, &area_id, run_id, position, joist)
         })
     }
 
