@@ -52,7 +52,11 @@ pub fn save_framing_field(
     edit: FramingEdit,
 ) -> Result<FieldCheck> {
     form.set(edit.field, edit.value.clone());
-    let (mut framing, errors) = form.merged_with(stored, units);
+    let reading = match owner {
+        FramingOwner::Member { run: Some(run), .. } => form.with_run_kinds(run),
+        _ => form.clone(),
+    };
+    let (mut framing, errors) = reading.merged_with(stored, units);
     let reads = !errors.iter().any(|e| e.field == edit.field);
     let question = (reads && !edit.confirmed)
         .then(|| {
@@ -244,5 +248,34 @@ mod tests {
             .1
             .framing
             .clear_span
+    }
+
+    #[test]
+    fn a_joist_takes_a_bearing_length_alone_bearing_on_what_its_run_bears_on() {
+        let (mut store, dir) = demo_store("joist-bearing");
+        let id = "0193a1c2-7d00-7000-8000-00000000d001";
+        let inspection = store.load_inspection(id).unwrap();
+        let run = inspection.run("run-kitchen").unwrap().1.framing.clone();
+        let mut form = FramingForm::default();
+        let owner = FramingOwner::Member {
+            id: "joist-k7",
+            label: "Joist 7",
+            run: Some(&run),
+        };
+        let check = save_framing_field(
+            &mut store,
+            owner,
+            &mut form,
+            &Framing::default(),
+            UnitSystem::Imperial,
+            edit("bearing_length", "2"),
+        )
+        .unwrap();
+        assert!(check.errors.is_empty(), "{:?}", check.errors);
+        let saved = store.load_inspection(id).unwrap();
+        let bearing = saved.member("joist-k7").unwrap().framing.bearing.unwrap();
+        assert_eq!(bearing.length.map(|l| l.in_inches()), Some(2.0));
+        assert_eq!(Some(bearing.on), run.bearing.map(|b| b.on));
+        std::fs::remove_dir_all(dir).ok();
     }
 }

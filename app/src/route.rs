@@ -1,8 +1,8 @@
 //! The app's screens and their addresses.
 
 use crate::views::{
-    AreaView, Findings, GirderScreen, InspectionView, Inspections, MemberView, ObservationView,
-    PostScreen, ReportView, RunView, SettingsView,
+    AreaView, Findings, GirderScreen, InspectionView, Inspections, JoistWalk, MemberView,
+    ObservationView, PostScreen, ReportView, RunView, SettingsView,
 };
 use dioxus::prelude::*;
 
@@ -20,6 +20,9 @@ pub enum Route {
     /// One joist run: its framing, checked live as it is typed.
     #[route("/run/:id")]
     RunView { id: String },
+    /// The joist walk along a run: the joist at `at` inches from where the walk began.
+    #[route("/walk/:run/:at")]
+    JoistWalk { run: String, at: String },
     /// One joist of a run, or a single member: its framing, observations and photos.
     #[route("/member/:id")]
     MemberView { id: String },

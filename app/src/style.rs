@@ -45,10 +45,18 @@ button + button { margin-left: 8px; }
 .keypad-shows { margin: 0 4px 6px; min-height: 28px; font-size: 22px; font-variant-numeric: tabular-nums; }
 .keypad .keys, .keypad .fractions { display: grid; gap: 6px; margin-bottom: 6px; max-width: 720px; margin-left: auto; margin-right: auto; }
 .keypad .keys { grid-template-columns: repeat(4, 1fr); }
-.keypad .fractions { grid-template-columns: repeat(8, 1fr); }
+.keypad .fractions { grid-template-columns: repeat(5, 1fr); }
 .keypad .key { margin: 0; min-width: 0; padding: 0; height: 52px; font-size: 22px; border-radius: 10px; background: transparent; color: var(--ink); border: 2px solid var(--line); }
 .keypad .key.fraction { font-size: 15px; height: 48px; }
 .keypad .key.done { background: var(--ink); color: var(--paper); border-color: var(--ink); }
 .keypad .key.quiet { font-size: 15px; }
-.keypad-room { height: 330px; }
+.keypad-room { height: 400px; }
+.walk-bar { position: sticky; top: 0; z-index: 5; display: flex; align-items: center; gap: 8px; background: var(--paper); padding: 6px 0; border-bottom: 1px solid var(--line); }
+.walk-bar .walk-place { flex: 1; text-align: center; line-height: 1.2; }
+.walk-bar .walk-place span { display: block; }
+.walk-bar button { margin: 0; }
+.quick-observations { display: flex; flex-wrap: wrap; gap: 8px; }
+.quick-observations button { margin: 0; }
+details > summary { min-height: 48px; display: flex; align-items: center; font-weight: 600; cursor: pointer; }
+.row-status { font-weight: 700; font-size: 15px; }
 "#;

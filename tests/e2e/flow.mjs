@@ -175,6 +175,12 @@ async function main() {
   console.log("inspection: add an area");
   await page.getByRole("heading", { name: ADDRESS }).waitFor();
   await shot(page, "inspection");
+  // The header is editable after creation: the code edition from its pick list, which the
+  // citations follow.
+  await page.locator("#about-inspection summary").tap();
+  await page.locator("#inspection-code-edition").selectOption("IRC 2021");
+  await page.locator("#inspection-property-year-built").fill("1962");
+  await shot(page, "inspection-edit");
   await page.locator("#area-name").fill("Crawlspace under the living room");
   await page.locator("#add-area").tap();
 
@@ -249,7 +255,7 @@ async function main() {
   await page.getByRole("heading", { name: "Findings" }).waitFor();
   const findings = await page.locator("main").innerText();
   assert.match(findings, /R502\.3/, "the span finding cites its table");
-  assert.match(findings, /R502\.8\.1/, "the notch finding cites its section");
+  assert.match(findings, /IRC 2021 R502\.8\.1/, "the notch finding cites its section, in the edition picked");
   assert.match(findings, /Who acts: Engineer first/, "who acts, as the report says it");
   await shot(page, "findings");
   // The inspector says the notch is one for the owner to watch: the report follows.
@@ -330,7 +336,12 @@ async function main() {
   await page.locator("#add-joist").tap();
   await page.getByText("enter only what differs").waitFor();
   assert.equal(await page.locator("#clear-span").getAttribute("placeholder"), `Same as the run: 16' 0"`);
+  // A bare number is inches: 13 for a span is asked about, with 13 ft offered.
   await page.locator("#clear-span").fill("13");
+  await page.locator("#clear-span-question").getByText("shorter than a floor joist spans").waitFor();
+  await shot(page, "joist-question");
+  await page.locator("#clear-span-question-instead").tap();
+  await page.waitForFunction(() => document.querySelector("#clear-span").value === `13' 0"`);
   // Same table cell as above: 13 ft 0 in is 84 % of 15 ft 5 in (rounded as the card shows it).
   await page.locator("#live-check").getByText("84 %").waitFor();
   await shot(page, "joist");
@@ -364,13 +375,13 @@ async function main() {
   await page.locator("#girder-grade").selectOption("no2");
   await page.locator("#girder-size").selectOption("2x10");
   await page.locator("#girder-plies").fill("3");
-  await page.locator("#girder-length").fill("24");
+  await page.locator("#girder-length").fill("24'");
   await page.getByText("3-ply 2x10 Spruce-pine-fir No. 2, 24' 0\"").first().waitFor();
   // A post typed past the girder's end is refused under the field, in words.
-  await page.locator("#post-at").fill("30");
+  await page.locator("#post-at").fill("30'");
   await page.locator("#add-post").tap();
   await page.getByText("beyond the girder's length").waitFor();
-  await page.locator("#post-at").fill("12");
+  await page.locator("#post-at").fill("12'");
   await page.locator("#add-post").tap();
   await page.getByRole("heading", { name: "Post 1" }).waitFor();
   await page.locator("#post-size").selectOption("4x4");
@@ -394,8 +405,59 @@ async function main() {
   await page.locator(".girder-view").getByText("12' 0\", 140 % over").first().waitFor();
   await shot(page, "girder");
 
-  console.log("archive the inspection, find it among the archived, bring it back");
+  console.log("joist walk: 20 joists with one differing value each, every tap counted");
   await page.locator("nav.back a").tap();
+  await tapLink(page, "Joists from the rim to the girder");
+  let taps = 0;
+  const tap = async (locator) => {
+    taps += 1;
+    await locator.tap();
+  };
+  await tap(page.locator("#walk-joists"));
+  await page.locator("#walk-place").waitFor();
+  await tap(page.locator("#bearing-length"));
+  const keypad = page.locator("#bearing-length-keypad");
+  await keypad.waitFor();
+  await shot(page, "walk-keypad");
+  const bearings = [];
+  for (let n = 1; n <= 20; n++) {
+    const inches = 16 * n;
+    const place = `Joist at ${Math.floor(inches / 12)}' ${inches % 12}"`;
+    await page.locator("#walk-place").getByText(place, { exact: true }).waitFor();
+    // Each joist differs from the one before: bearings of 2 and 3 in by turns.
+    const digit = n % 2 ? "2" : "3";
+    bearings.push(digit);
+    await tap(keypad.locator(`[data-key="${digit}"]`));
+    await page.waitForFunction((d) => document.querySelector("#bearing-length").value === d, digit);
+    await tap(page.locator("#next-joist"));
+  }
+  console.log(`  20 joists walked in ${taps} taps`);
+  assert.ok(taps <= 60, `the walk took ${taps} taps`);
+  await page.locator("#walk-place").getByText(`Joist at 28' 0"`, { exact: true }).waitFor();
+  // The 21st place starts as the 20th was: same as previous.
+  await page.locator("#walk-summary").getByText("Differs from the run: bearing 3\"").waitFor();
+  await page.locator("nav.back a").tap();
+  await page.getByRole("heading", { name: "Joists from the rim to the girder" }).waitFor();
+  for (const [n, digit] of [[1, "2"], [2, "3"], [20, "3"]]) {
+    const inches = 16 * n;
+    const row = page.locator("ul.list li").filter({ hasText: `Joist at ${Math.floor(inches / 12)}' ${inches % 12}"` });
+    await row.getByText(`bearing ${digit}"`).waitFor();
+    // R502.6: 3 in of bearing on masonry; 2 in is over the limit, shown on the row.
+    if (digit === "2") await row.locator(".row-status.status-over-limit").waitFor();
+  }
+  await shot(page, "run-walked");
+
+  console.log("area loads edited after creation: tile above, the run's allowable span follows");
+  await page.locator("nav.back a").tap();
+  await page.locator("#about-area summary").tap();
+  await page.locator("#area-loads-heavy-finish").selectOption("yes");
+  await tapLink(page, "Joists from the rim to the girder");
+  // Source: IRC 2018 Table R502.3.1(2) (40 psf live, 20 psf dead): 2x10 SPF No. 2 at 16 in
+  // allows 14-1.
+  await page.locator("#live-check").getByText("Allowable span 14' 1\"").waitFor();
+  await page.locator("nav.back a").tap();
+
+  console.log("archive the inspection, find it among the archived, bring it back");
   await upToInspection(page);
   await page.locator("#archive").tap();
   await page.getByRole("heading", { name: "Inspections" }).waitFor();

@@ -26,26 +26,30 @@ pub fn FramingFields(
     on_change: EventHandler<FieldChange>,
     /// "Keep" answered to the question about a field's value.
     on_keep: EventHandler<FieldChange>,
+    /// Only these fields (the joist walk's few); all when None.
+    #[props(default)]
+    only: Option<&'static [&'static str]>,
 ) -> Element {
+    let shown = |name: &str| only.is_none_or(|names| names.contains(&name));
     let base = base.unwrap_or_default();
     let inherits = base != FramingForm::default();
     let error = |name: &str| error_of(&check.errors, name);
     let question = |name: &str| check.question.clone().filter(|q| q.field == name);
     rsx! {
-        Pick { name: "kind", label: "Member", picks: MEMBER_KINDS, value: form.kind.clone(), inherited: inherits.then(|| base.kind.clone()), error: error("kind"), on_change }
-        Pick { name: "species", label: "Species", picks: SPECIES, value: form.species.clone(), inherited: inherits.then(|| base.species.clone()), error: error("species"), on_change }
-        Pick { name: "grade", label: "Grade (from the stamp)", picks: GRADES, value: form.grade.clone(), inherited: inherits.then(|| base.grade.clone()), error: error("grade"), on_change }
-        Pick { name: "size", label: "Size", picks: SIZES, value: form.size.clone(), inherited: inherits.then(|| base.size.clone()), error: error("size"), on_change }
-        Typed { name: "actual", tape: false, label: "Measured section, if not dressed lumber (1-3/4 x 9-1/2)", inputmode: "text", value: form.actual.clone(), inherited: base.actual.clone(), error: error("actual"), question: question("actual"), metric, on_change, on_keep }
-        Typed { name: "spacing", tape: true, label: "Spacing on centre", inputmode: "decimal", value: form.spacing.clone(), inherited: base.spacing.clone(), error: error("spacing"), question: question("spacing"), metric, on_change, on_keep }
-        Typed { name: "clear_span", tape: true, label: "Clear span (15' 2\" or 15-2)", inputmode: "text", value: form.clear_span.clone(), inherited: base.clear_span.clone(), error: error("clear_span"), question: question("clear_span"), metric, on_change, on_keep }
-        Pick { name: "bearing_on", label: "Ends bear on", picks: SUPPORTS, value: form.bearing_on.clone(), inherited: inherits.then(|| base.bearing_on.clone()), error: error("bearing_on"), on_change }
-        Typed { name: "bearing_length", tape: true, label: "Bearing length", inputmode: "decimal", value: form.bearing_length.clone(), inherited: base.bearing_length.clone(), error: error("bearing_length"), question: question("bearing_length"), metric, on_change, on_keep }
-        Pick { name: "end_restraint", label: "End restraint", picks: END_RESTRAINTS, value: form.end_restraint.clone(), inherited: inherits.then(|| base.end_restraint.clone()), error: error("end_restraint"), on_change }
-        Pick { name: "bridging", label: "Bridging", picks: BRIDGING, value: form.bridging.clone(), inherited: inherits.then(|| base.bridging.clone()), error: error("bridging"), on_change }
-        Typed { name: "bridging_interval", tape: true, label: "Largest distance between bridging lines", inputmode: "text", value: form.bridging_interval.clone(), inherited: base.bridging_interval.clone(), error: error("bridging_interval"), question: question("bridging_interval"), metric, on_change, on_keep }
-        Pick { name: "room_use_above", label: "Room above, if not as the area", picks: ROOM_USES, value: form.room_use_above.clone(), inherited: inherits.then(|| base.room_use_above.clone()), error: error("room_use_above"), on_change }
-        Pick { name: "finishes", label: "Finishes above, if not as the area", picks: FINISHES, value: form.finishes.clone(), inherited: inherits.then(|| base.finishes.clone()), error: error("finishes"), on_change }
+        if shown("kind") { Pick { name: "kind", label: "Member", picks: MEMBER_KINDS, value: form.kind.clone(), inherited: inherits.then(|| base.kind.clone()), error: error("kind"), on_change } }
+        if shown("species") { Pick { name: "species", label: "Species", picks: SPECIES, value: form.species.clone(), inherited: inherits.then(|| base.species.clone()), error: error("species"), on_change } }
+        if shown("grade") { Pick { name: "grade", label: "Grade (from the stamp)", picks: GRADES, value: form.grade.clone(), inherited: inherits.then(|| base.grade.clone()), error: error("grade"), on_change } }
+        if shown("size") { Pick { name: "size", label: "Size", picks: SIZES, value: form.size.clone(), inherited: inherits.then(|| base.size.clone()), error: error("size"), on_change } }
+        if shown("actual") { Typed { name: "actual", tape: false, label: "Measured section, if not dressed lumber (1-3/4 x 9-1/2)", inputmode: "text", value: form.actual.clone(), inherited: base.actual.clone(), error: error("actual"), question: question("actual"), metric, on_change, on_keep } }
+        if shown("spacing") { Typed { name: "spacing", tape: true, label: "Spacing on centre", inputmode: "decimal", value: form.spacing.clone(), inherited: base.spacing.clone(), error: error("spacing"), question: question("spacing"), metric, on_change, on_keep } }
+        if shown("clear_span") { Typed { name: "clear_span", tape: true, label: "Clear span (15' 2\" or 15-2)", inputmode: "text", value: form.clear_span.clone(), inherited: base.clear_span.clone(), error: error("clear_span"), question: question("clear_span"), metric, on_change, on_keep } }
+        if shown("bearing_on") { Pick { name: "bearing_on", label: "Ends bear on", picks: SUPPORTS, value: form.bearing_on.clone(), inherited: inherits.then(|| base.bearing_on.clone()), error: error("bearing_on"), on_change } }
+        if shown("bearing_length") { Typed { name: "bearing_length", tape: true, label: "Bearing length", inputmode: "decimal", value: form.bearing_length.clone(), inherited: base.bearing_length.clone(), error: error("bearing_length"), question: question("bearing_length"), metric, on_change, on_keep } }
+        if shown("end_restraint") { Pick { name: "end_restraint", label: "End restraint", picks: END_RESTRAINTS, value: form.end_restraint.clone(), inherited: inherits.then(|| base.end_restraint.clone()), error: error("end_restraint"), on_change } }
+        if shown("bridging") { Pick { name: "bridging", label: "Bridging", picks: BRIDGING, value: form.bridging.clone(), inherited: inherits.then(|| base.bridging.clone()), error: error("bridging"), on_change } }
+        if shown("bridging_interval") { Typed { name: "bridging_interval", tape: true, label: "Largest distance between bridging lines", inputmode: "text", value: form.bridging_interval.clone(), inherited: base.bridging_interval.clone(), error: error("bridging_interval"), question: question("bridging_interval"), metric, on_change, on_keep } }
+        if shown("room_use_above") { Pick { name: "room_use_above", label: "Room above, if not as the area", picks: ROOM_USES, value: form.room_use_above.clone(), inherited: inherits.then(|| base.room_use_above.clone()), error: error("room_use_above"), on_change } }
+        if shown("finishes") { Pick { name: "finishes", label: "Finishes above, if not as the area", picks: FINISHES, value: form.finishes.clone(), inherited: inherits.then(|| base.finishes.clone()), error: error("finishes"), on_change } }
     }
 }
 

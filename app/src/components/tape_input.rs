@@ -1,15 +1,18 @@
 //! A length field with the tape keypad: digits, feet and inch marks and the fractions of a
 //! tape in sixteenths (millimetres when the inspection is metric), in reach of one thumb.
-//! The keypad opens when the field is tapped and stays on it until "Done"; the first key
+//! The keypad opens when the field is tapped and stays on it until "Done" or the screen
+//! changes; the first key
 //! after it opens replaces the value shown (a field filled "same as before" is retyped, not
 //! appended to). "Keyboard" hands the field to the phone's own keyboard instead.
 
+use crate::Route;
 use dioxus::prelude::*;
 
 /// Which length field has the keypad, shared by every field of the app (one keypad at a time).
 #[derive(Clone, Copy)]
 pub struct TapeState {
-    /// The element id of the field with the keypad open.
+    /// The field with the keypad open: its screen's address and element id (`place_key`),
+    /// so a field of the same id on another screen does not open with it.
     pub active: Signal<Option<String>>,
     /// The inspector chose the phone's keyboard for lengths.
     pub system_keyboard: Signal<bool>,
@@ -25,12 +28,32 @@ impl TapeState {
             fresh: Signal::new(false),
         }
     }
+
+    /// Keeps the keypad of the field now open on the same field of the screen at `next`
+    /// (the joist walk's next joist), ready to retype it.
+    pub fn carry_open(mut self, next: &Route) {
+        let open = self
+            .active
+            .peek()
+            .as_deref()
+            .and_then(|key| key.rsplit_once('#'))
+            .map(|(_, id)| format!("{next}#{id}"));
+        if open.is_some() {
+            self.active.set(open);
+            self.fresh.set(true);
+        }
+    }
 }
 
 impl Default for TapeState {
     fn default() -> Self {
         TapeState::new()
     }
+}
+
+/// The key of a field on the screen now showing.
+fn place_key(id: &str) -> String {
+    format!("{}#{id}", use_route::<Route>())
 }
 
 /// The eighths shown at once; the sixteenths behind one key.
@@ -52,8 +75,10 @@ pub fn TapeInput(
         mut active,
         system_keyboard,
         mut fresh,
+        ..
     } = tape;
-    let open = active.read().as_deref() == Some(id.as_str());
+    let key = place_key(&id);
+    let open = active.read().as_deref() == Some(key.as_str());
     let inputmode = if system_keyboard() {
         if metric {
             "decimal"
@@ -63,12 +88,13 @@ pub fn TapeInput(
     } else {
         "none"
     };
-    let focus_id = id.clone();
     rsx! {
         input { id: "{id}", class: "tape", inputmode, autocomplete: "off", value: "{value}", placeholder: "{placeholder}",
-            onfocus: move |_| {
+            // Opened by a tap, not by focus alone: a field focused by the keyboard's tab or
+            // by a script keeps the page uncovered.
+            onclick: move |_| {
                 if !system_keyboard() {
-                    active.set(Some(focus_id.clone()));
+                    active.set(Some(key.clone()));
                     fresh.set(true);
                 }
             },
@@ -91,6 +117,7 @@ fn Keypad(id: String, value: String, metric: bool, on_input: EventHandler<String
         mut active,
         mut system_keyboard,
         mut fresh,
+        ..
     } = tape;
     let mut sixteenths = use_signal(|| false);
     let press = {

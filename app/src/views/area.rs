@@ -2,7 +2,7 @@
 //! one's values), a single member or a girder line; the conditions of the space, saved as
 //! they are picked.
 
-use crate::components::{AutosaveFields, PathChange, Photos};
+use crate::components::{worst_status, AutosaveFields, PathChange, Photos, RowStatus};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -23,6 +23,17 @@ pub fn AreaView(id: String) -> Element {
         .and_then(|i| i.area(&id).cloned().map(|a| (i, a)))
     else {
         return rsx! { main { p { "This area is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
+    };
+    let evaluation = app.evaluation(&inspection);
+    let run_status = |r: &JoistRun| {
+        let mut ids: Vec<&str> = vec![&r.id];
+        ids.extend(r.joists.iter().map(|j| j.id.as_str()));
+        worst_status(&evaluation, &ids)
+    };
+    let girder_status = |g: &GirderLine| {
+        let mut ids: Vec<&str> = vec![&g.id];
+        ids.extend(g.posts.iter().map(|p| p.id.as_str()));
+        worst_status(&evaluation, &ids)
     };
     let previous = area.runs.last().map(|r| r.framing.clone());
     let units = inspection.units;
@@ -128,7 +139,12 @@ pub fn AreaView(id: String) -> Element {
             h2 { "Joist runs" }
             ul { class: "list",
                 for run in area.runs.iter() {
-                    li { key: "{run.id}", Link { to: Route::RunView { id: run.id.clone() }, "{run.label}" } }
+                    li { key: "{run.id}",
+                        Link { to: Route::RunView { id: run.id.clone() }, "{run.label}"
+                            br {}
+                            RowStatus { status: run_status(run) }
+                        }
+                    }
                 }
             }
             h2 { "Single members" }
@@ -137,7 +153,12 @@ pub fn AreaView(id: String) -> Element {
             }
             ul { class: "list",
                 for m in area.members.iter() {
-                    li { key: "{m.id}", Link { to: Route::MemberView { id: m.id.clone() }, "{m.label}" } }
+                    li { key: "{m.id}",
+                        Link { to: Route::MemberView { id: m.id.clone() }, "{m.label}"
+                            br {}
+                            RowStatus { status: worst_status(&evaluation, &[&m.id]) }
+                        }
+                    }
                 }
             }
             label { r#for: "member-name", "A single member" }
@@ -153,7 +174,8 @@ pub fn AreaView(id: String) -> Element {
                         Link { to: Route::GirderScreen { id: g.id.clone() },
                             "{g.label}"
                             br {}
-                            span { class: "muted", "{g.posts.len()} posts" }
+                            RowStatus { status: girder_status(g) }
+                            span { class: "muted", " {g.posts.len()} posts" }
                         }
                     }
                 }

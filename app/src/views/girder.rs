@@ -2,7 +2,9 @@
 //! load of the joists it carries, its findings and its posts' findings, its posts (add one by
 //! its distance from end A), photos.
 
-use crate::components::{GirderSvg, PathChange, PathFields, Photos, RemoveButton, StatusBadge};
+use crate::components::{
+    worst_status, GirderSvg, PathChange, PathFields, Photos, RemoveButton, RowStatus, StatusBadge,
+};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -137,7 +139,12 @@ pub fn GirderScreen(id: String) -> Element {
             h2 { "Posts" }
             ul { class: "list",
                 for post in line.posts_in_order() {
-                    li { key: "{post.id}", Link { to: Route::PostScreen { id: post.id.clone() }, "{post.label}" } }
+                    li { key: "{post.id}",
+                        Link { to: Route::PostScreen { id: post.id.clone() }, "{post.label}"
+                            br {}
+                            RowStatus { status: worst_status(&evaluation, &[&post.id]) }
+                        }
+                    }
                 }
             }
             label { r#for: "post-at", "A post at this distance from end A" }

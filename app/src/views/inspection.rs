@@ -1,6 +1,6 @@
 //! One inspection: its areas, each with a count of what is over a limit; add an area.
 
-use crate::components::{AutosaveFields, PathChange};
+use crate::components::{worst_status, AutosaveFields, PathChange, RowStatus};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{field_text, inspection_with, FieldError, INSPECTION_FIELDS};
@@ -110,7 +110,8 @@ pub fn InspectionView(id: String) -> Element {
                     li { key: "{area_id}",
                         Link { to: Route::AreaView { id: area_id.clone() }, "{area_name}"
                             br {}
-                            span { class: "muted", "{over} over a limit or to be evaluated" }
+                            RowStatus { status: worst_status(&evaluation, &[&area_id]) }
+                            span { class: "muted", " {over} over a limit or to be evaluated" }
                         }
                     }
                 }

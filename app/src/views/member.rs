@@ -7,7 +7,7 @@ use crate::components::{
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FramingForm};
+use undercroft_core::forms::{live_check, place_key, FramingForm};
 use undercroft_core::units::UnitSystem;
 
 #[component]
@@ -96,6 +96,9 @@ pub fn MemberView(id: String) -> Element {
             h1 { "{label}" }
             if run.is_some() {
                 p { class: "muted", "A joist of this run: enter only what differs from the run." }
+            }
+            if let Some((walk_run, at)) = inspection.joist_place(&id) {
+                p { Link { id: "back-to-walk", to: Route::JoistWalk { run: walk_run.id.clone(), at: place_key(at) }, "Back to the joist walk" } }
             }
             LiveCard { check }
             label { r#for: "member-label", "Label" }

@@ -13,6 +13,7 @@ mod post;
 mod report;
 mod run;
 mod settings;
+mod walk;
 
 pub use area::AreaView;
 pub use findings::Findings;
@@ -25,3 +26,4 @@ pub use post::PostScreen;
 pub use report::ReportView;
 pub use run::RunView;
 pub use settings::SettingsView;
+pub use walk::JoistWalk;

@@ -5,7 +5,7 @@ use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge, TapeInpu
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
-    fields_of, preview_observation, side_view_with, FieldType, ObservationForm, KINDS,
+    fields_of, place_key, preview_observation, side_view_with, FieldType, ObservationForm, KINDS,
 };
 use undercroft_core::units::{bare_number_hint, UnitSystem};
 
@@ -70,7 +70,18 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
     let view = side_view_with(&inspection, &owner, &evaluation);
     let specs = fields_of(&f.kind);
     // Back up to the run or member the observation is on.
+    let walked = inspection.joist_place(&owner);
     let (up, up_name) = match (inspection.run(&owner), inspection.member(&owner)) {
+        (_, Some(member)) if walked.is_some() => {
+            let (run, at) = walked.expect("checked");
+            (
+                Route::JoistWalk {
+                    run: run.id.clone(),
+                    at: place_key(at),
+                },
+                format!("{} (the walk)", member.label),
+            )
+        }
         (Some((_, run)), _) => (Route::RunView { id: run.id.clone() }, run.label.clone()),
         (None, Some(member)) => (
             Route::MemberView {

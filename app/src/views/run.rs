@@ -2,12 +2,13 @@
 //! joists that differ or carry their own observations; what was seen on its typical joist.
 
 use crate::components::{
-    FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
+    worst_status, FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
+    RowStatus,
 };
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, FramingForm};
+use undercroft_core::forms::{first_place, live_check, place_key, FramingForm};
 use undercroft_core::model::Joist;
 use undercroft_core::store::new_id;
 use undercroft_core::units::UnitSystem;
@@ -23,6 +24,7 @@ pub fn RunView(id: String) -> Element {
         return rsx! { main { p { "This run is not in the store." } Link { to: Route::Inspections {}, "Back to inspections" } } };
     };
     let units = inspection.units;
+    let evaluation = app.evaluation(&inspection);
     let stored = run.framing.clone();
     let mut form = use_signal(|| FramingForm::from_framing(&stored, units));
     let mut check_of_fields = use_signal(FieldCheck::default);
@@ -133,13 +135,15 @@ pub fn RunView(id: String) -> Element {
             h2 { "What was seen on these joists" }
             ObservationList { owner: id.clone(), observations: run.observations.clone(), units }
             h2 { "Joists that differ or have their own observations" }
+            p { Link { class: "button", id: "walk-joists", to: Route::JoistWalk { run: id.clone(), at: place_key(first_place(&run)) }, "Walk the joists one by one" } }
             ul { class: "list",
                 for joist in run.joists.iter() {
                     li { key: "{joist.id}",
                         Link { to: Route::MemberView { id: joist.id.clone() },
                             "{joist.label}"
                             br {}
-                            span { class: "muted", "{joist.observations.len()} observations" }
+                            RowStatus { status: worst_status(&evaluation, &[&joist.id]) }
+                            span { class: "muted", " {joist_summary(joist, units)}" }
                         }
                     }
                 }
@@ -148,5 +152,22 @@ pub fn RunView(id: String) -> Element {
             Photos { owner: id.clone() }
             RemoveButton { id: id.clone(), what: "this run", then: Route::AreaView { id: area.id.clone() } }
         }
+    }
+}
+
+/// What a joist row says beside its status: what differs from the run, and how many
+/// observations it carries.
+fn joist_summary(joist: &Joist, units: UnitSystem) -> String {
+    let differs = FramingForm::from_framing(&joist.framing, units).filled_fields();
+    let seen = match joist.observations.len() {
+        0 => String::new(),
+        1 => "1 observation".into(),
+        n => format!("{n} observations"),
+    };
+    match (differs.is_empty(), seen.is_empty()) {
+        (true, true) => "as the run".into(),
+        (true, false) => seen,
+        (false, true) => differs.join(", "),
+        (false, false) => format!("{}; {seen}", differs.join(", ")),
     }
 }

@@ -271,6 +271,55 @@ impl FramingForm {
         (framing, errors)
     }
 
+    /// A joist's form as read against its run: a bearing length or a bridging interval typed
+    /// without saying what it bears on or what kind of bridging takes the run's.
+    pub fn with_run_kinds(&self, run: &Framing) -> FramingForm {
+        let mut form = self.clone();
+        if form.bearing_on.trim().is_empty() && !form.bearing_length.trim().is_empty() {
+            if let Some(b) = run.bearing {
+                form.bearing_on = enum_text(&b.on);
+            }
+        }
+        if form.bridging.trim().is_empty() && !form.bridging_interval.trim().is_empty() {
+            if let Some(b) = run.bridging {
+                form.bridging = enum_text(&b.kind);
+            }
+        }
+        form
+    }
+
+    /// The fields filled in, each as a short phrase ("span 13' 0\"", "bearing 2\""): what a
+    /// joist lists as differing from its run.
+    pub fn filled_fields(&self) -> Vec<String> {
+        let named: [(&str, &String); 14] = [
+            ("", &self.kind),
+            ("", &self.species),
+            ("grade", &self.grade),
+            ("", &self.size),
+            ("measured", &self.actual),
+            ("spacing", &self.spacing),
+            ("span", &self.clear_span),
+            ("bearing", &self.bearing_length),
+            ("on", &self.bearing_on),
+            ("ends", &self.end_restraint),
+            ("bridging", &self.bridging),
+            ("bridging every", &self.bridging_interval),
+            ("rooms above", &self.room_use_above),
+            ("finishes", &self.finishes),
+        ];
+        named
+            .iter()
+            .filter(|(_, v)| !v.trim().is_empty())
+            .map(|(name, v)| {
+                if name.is_empty() {
+                    v.trim().to_string()
+                } else {
+                    format!("{name} {}", v.trim())
+                }
+            })
+            .collect()
+    }
+
     /// Fills every empty field from the previous run's form (one tap: "same as before").
     pub fn fill_from(&mut self, previous: &FramingForm) {
         let pairs: [(&mut String, &String); 14] = [

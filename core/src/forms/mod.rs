@@ -4,6 +4,7 @@
 
 mod framing_form;
 mod header_form;
+mod joist_walk;
 mod live_check;
 mod observation_form;
 mod path_form;
@@ -14,6 +15,9 @@ mod preview;
 pub use framing_form::{keep_stored, FieldError, FramingForm};
 pub use header_form::{
     area_with, inspection_with, AREA_FIELDS, AREA_KINDS, CODE_EDITIONS, INSPECTION_FIELDS,
+};
+pub use joist_walk::{
+    first_place, joist_at, place_from_key, place_key, previous_joist, walk_label, walk_step,
 };
 pub use live_check::{live_check, LiveCheck};
 pub use observation_form::{fields_of, FieldSpec, FieldType, ObservationForm, KINDS, SUPPORTS};

@@ -87,6 +87,17 @@ impl Inspection {
             .or_else(|| m.run.and_then(|r| r.framing.clear_span))
     }
 
+    /// A walked joist's run and its place along it (None for a joist entered by label, or
+    /// anything else).
+    pub fn joist_place(&self, id: &str) -> Option<(&JoistRun, crate::units::Length)> {
+        self.areas.iter().flat_map(|a| a.runs.iter()).find_map(|r| {
+            r.joists
+                .iter()
+                .find(|j| j.id == id)
+                .and_then(|j| j.at.map(|at| (r, at)))
+        })
+    }
+
     /// A girder line and the area it is in.
     pub fn girder(&self, id: &str) -> Option<(&Area, &GirderLine)> {
         self.areas

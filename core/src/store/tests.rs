@@ -279,9 +279,12 @@ fn edits_inside_an_inspection() {
         .iter()
         .map(|j| j.at.map(|l| l.in_inches()))
         .collect();
-    assert_eq!(placed, [Some(144.0), None], "a walked joist keeps its place");
-    let again = crate::interchange::from_json(&crate::interchange::to_json(&loaded))
-        .unwrap();
+    assert_eq!(
+        placed,
+        [Some(144.0), None],
+        "a walked joist keeps its place"
+    );
+    let again = crate::interchange::from_json(&crate::interchange::to_json(&loaded)).unwrap();
     assert_eq!(again, loaded, "and so does its file");
     assert_eq!(
         loaded.areas[0].runs[0].joists[1].observations[0].note,
