@@ -58,5 +58,10 @@ button + button { margin-left: 8px; }
 .quick-observations { display: flex; flex-wrap: wrap; gap: 8px; }
 .quick-observations button { margin: 0; }
 details > summary { min-height: 48px; display: flex; align-items: center; font-weight: 600; cursor: pointer; }
+.offscreen { position: absolute; left: -9999px; width: 1px; height: 1px; }
+.photo-picker { display: flex; flex-wrap: wrap; gap: 8px; margin: 8px 0; }
+.photo-picker label.button { display: inline-flex; align-items: center; margin: 0; box-sizing: border-box; min-height: 48px; }
+label.button.quiet { background: transparent; color: var(--ink); }
+.undo-bar { display: flex; align-items: center; justify-content: space-between; gap: 8px; border: 2px solid var(--ink); border-radius: 10px; padding: 6px 10px; margin: 8px 0; }
 .row-status { font-weight: 700; font-size: 15px; }
 "#;

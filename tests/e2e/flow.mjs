@@ -227,8 +227,8 @@ async function main() {
   assert.match(verdictText, /over/i, verdictText);
   assert.ok(await page.locator("svg").first().isVisible(), "the side view is drawn");
 
-  console.log("photo: attach a JPEG to the notch");
-  await page.locator('input[type="file"]').setInputFiles({
+  console.log("photo: attach a JPEG to the notch, from the camera input");
+  await page.locator('input[type="file"][capture]').setInputFiles({
     name: "notch.jpg",
     mimeType: "image/jpeg",
     buffer: jpeg,
@@ -236,7 +236,7 @@ async function main() {
   await page.getByText("notch.jpg added").waitFor();
   await page.locator(".photos img").first().waitFor();
   // A file that is not a photo is refused with a reason, and nothing else changes.
-  await page.locator('input[type="file"]').setInputFiles({
+  await page.locator('input[type="file"][multiple]').setInputFiles({
     name: "notes.txt",
     mimeType: "text/plain",
     buffer: Buffer.from("not a photo\n"),
@@ -245,6 +245,14 @@ async function main() {
   assert.match(refused, /not added: .+/, refused);
   console.log(`  ${refused}`);
   assert.equal(await page.locator(".photos img").count(), 1, "the one photo is still there");
+  assert.equal(await page.locator('[role="alert"]').filter({ hasText: "notes.txt was not added" }).count(), 1, "the refusal is an alert");
+  // Removed by mistake, put back with one tap: same photo, same place.
+  await page.locator(".photos .remove-photo").tap();
+  await page.getByText("Photo removed.").waitFor();
+  assert.equal(await page.locator(".photos img").count(), 0);
+  await page.locator("#undo-remove").tap();
+  await page.getByText("Photo put back").waitFor();
+  await page.locator(".photos img").first().waitFor();
   await shot(page, "observation");
 
   console.log("findings: both, with citations");
@@ -257,6 +265,12 @@ async function main() {
   assert.match(findings, /R502\.3/, "the span finding cites its table");
   assert.match(findings, /IRC 2021 R502\.8\.1/, "the notch finding cites its section, in the edition picked");
   assert.match(findings, /Who acts: Engineer first/, "who acts, as the report says it");
+  // A photo straight onto a finding from the framing fields: the run's span.
+  const spanCard = page.locator(".card.finding").filter({ has: page.getByRole("heading", { name: "Joist span" }) }).first();
+  assert.equal(await spanCard.locator(".photo-count").innerText(), "No photo yet");
+  await spanCard.locator('input[type="file"][capture]').setInputFiles({ name: "span.jpg", mimeType: "image/jpeg", buffer: jpeg });
+  await spanCard.getByText("span.jpg added").waitFor();
+  await spanCard.locator(".photo-count").getByText("1 photo").waitFor();
   await shot(page, "findings");
   // The inspector says the notch is one for the owner to watch: the report follows.
   const notchCard = page.locator(".card.finding").filter({ hasText: "Notch in a sawn joist" });
@@ -358,7 +372,7 @@ async function main() {
   // A 12 MP photo, as a phone takes it, through the same file input (timed, not asserted).
   const big = await makeJpeg(browser, 4000, 3000);
   const started = Date.now();
-  await page.locator('input[type="file"]').setInputFiles({ name: "header.jpg", mimeType: "image/jpeg", buffer: big });
+  await page.locator('input[type="file"][multiple]').setInputFiles({ name: "header.jpg", mimeType: "image/jpeg", buffer: big });
   await page.getByText("header.jpg added").waitFor({ timeout: 60000 });
   await page.locator(".photos img").first().waitFor();
   console.log(`  a 4000x3000 photo (${(big.length / 1e6).toFixed(1)} MB) was attached in ${Date.now() - started} ms`);

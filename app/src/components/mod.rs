@@ -20,7 +20,7 @@ pub use girder_svg::GirderSvg;
 pub use live_card::LiveCard;
 pub use observation_list::ObservationList;
 pub use path_fields::{PathChange, PathFields};
-pub use photos::Photos;
+pub use photos::{PhotoMessage, PhotoOutcome, PhotoPicker, Photos};
 pub use question_card::QuestionCard;
 pub use remove_button::RemoveButton;
 pub use row_status::{worst_status, RowStatus};

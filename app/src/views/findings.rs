@@ -4,7 +4,7 @@
 
 use super::finding_route::route_of;
 use super::findings_filter::{shown, StatusFilter};
-use crate::components::StatusBadge;
+use crate::components::{PhotoMessage, PhotoOutcome, PhotoPicker, StatusBadge};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::priority::{default_priority, effective_priority, Priority};
@@ -32,6 +32,10 @@ struct Row {
     priority: Priority,
     /// The priority set from the finding, before the inspector changes it.
     default_priority: Priority,
+    /// What a photo of this finding is attached to: its observation, else its member.
+    photo_owner: String,
+    /// Photos already attached there.
+    photos: usize,
 }
 
 #[component]
@@ -51,6 +55,13 @@ pub fn Findings(id: String) -> Element {
         return rsx! { main { p { "This inspection is not in the store." } } };
     };
     let evaluation = app.evaluation(&inspection);
+    let photo_count = |owner: &str| {
+        inspection
+            .photos
+            .iter()
+            .filter(|p| p.attached_to == owner)
+            .count()
+    };
     let rows: Vec<Row> = evaluation
         .by_attention()
         .into_iter()
@@ -94,6 +105,12 @@ pub fn Findings(id: String) -> Element {
                 go: route_of(&inspection, f),
                 priority: effective_priority(f, note.priority),
                 default_priority: default_priority(f),
+                photo_owner: f
+                    .observation_id
+                    .as_deref()
+                    .unwrap_or(&f.place.member_id)
+                    .to_string(),
+                photos: photo_count(f.observation_id.as_deref().unwrap_or(&f.place.member_id)),
                 note,
             }
         })
@@ -175,6 +192,12 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
         let _ = app.change(|s| s.set_finding_note(&inspection_id, &n));
     });
     let set_aside = row.note.not_applicable_reason.clone();
+    let mut photo_outcome = use_signal(|| None::<PhotoOutcome>);
+    let photos_said = match row.photos {
+        0 => "No photo yet".to_string(),
+        1 => "1 photo".to_string(),
+        n => format!("{n} photos"),
+    };
     rsx! {
         div { class: "card finding",
             StatusBadge { status: row.status, label: row.label.clone(), use_text: row.use_text.clone() }
@@ -194,6 +217,9 @@ fn FindingCard(inspection_id: String, row: Row) -> Element {
             if !row.note.note.is_empty() {
                 p { "Note: {row.note.note}" }
             }
+            p { class: "muted photo-count", "{photos_said}" }
+            PhotoPicker { owner: row.photo_owner.clone(), tag: format!("-{}", row.key), on_outcome: move |o| photo_outcome.set(Some(o)) }
+            PhotoMessage { outcome: photo_outcome() }
             button { class: "quiet", onclick: move |_| open.toggle(), if open() { "Close" } else { "Note, recommendation, set aside" } }
             if open() {
                 label { r#for: "priority-{row.key}", "Who acts and how soon" }

@@ -8,6 +8,7 @@ mod inspections;
 mod load;
 mod migrate;
 mod notes;
+mod photo_undo;
 mod photos;
 mod save;
 mod settings;
@@ -19,6 +20,7 @@ pub use files::write_durably;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::{APPLICATION_ID, SCHEMA_VERSION};
 pub use notes::{DeliveredReport, FindingNote};
+pub use photo_undo::RemovedPhoto;
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
 pub use settings::{Screen, Settings};
 

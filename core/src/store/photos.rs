@@ -196,7 +196,7 @@ impl Store {
     /// The inspection of a photo's owner, which must be an area, run, member or observation.
     /// The inspection a photo's owner is in. The inspection itself may own a photo: the
     /// front of the house, shown with the report's title.
-    fn check_owner(&self, attached_to: &str) -> Result<String> {
+    pub(super) fn check_owner(&self, attached_to: &str) -> Result<String> {
         self.inspection_of(attached_to)
     }
 
