@@ -157,8 +157,12 @@ fn observation_shows_verdict_citation_and_side_view() {
     assert!(html.contains("<svg"), "the side view is drawn");
     assert!(html.contains("middle third"));
     assert!(
-        html.contains("Take or pick photos"),
+        html.contains("Take a photo") && html.contains("Pick photos"),
         "photos can be added to a saved observation"
+    );
+    assert!(
+        html.contains("capture=\"environment\""),
+        "one tap opens the camera on a phone"
     );
     assert!(html.contains("accept=\"image/*\""));
     assert!(
