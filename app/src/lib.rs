@@ -30,7 +30,6 @@ pub fn App() -> Element {
     rsx! {
         style { {style::CSS} }
         div { class: "app screen-{screen.key()}",
-            div { class: "notice", "Screening tool, not an engineering evaluation. Local codes govern; refer structural concerns to a licensed professional." }
             Router::<Route> {}
         }
     }

@@ -1,37 +1,60 @@
-//! The app's one stylesheet: large tap targets, high contrast, a dark scheme for dim light
-//! (chosen in settings, or as the device is set).
+//! The app's one stylesheet, a visual language of our own: a warm paper ground with a lamp-amber
+//! accent under the top bar, a four-step type scale (15, 18, 21, 24 px), spacing in 4 px steps,
+//! large tap targets, status colours always beside their words (and a mark before them), and a
+//! dark scheme for dim crawlspaces (chosen in settings, or as the device is set).
 
 pub const CSS: &str = r#"
-.app { --ink: #111; --paper: #fff; --muted: #555; --line: #bbb; --over: #9e1a1a; --near: #8a5a00; --ok: #1d5e2c; }
-.app.screen-dark { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
+.app { --ink: #16181d; --paper: #f4f2ec; --surface: #ffffff; --muted: #4f535a; --line: #c6c1b5; --accent: #8a4b14;
+  --over: #a3161a; --near: #7a5200; --ok: #1d5e2c; --grey: #4a5a6a;
+  --s1: 4px; --s2: 8px; --s3: 12px; --s4: 16px; --s5: 24px;
+  --t-small: 15px; --t-body: 18px; --t-head: 21px; --t-title: 24px; }
+.app.screen-dark { --ink: #ecebe6; --paper: #101114; --surface: #1a1d22; --muted: #b4b6ba; --line: #3c414a; --accent: #f0a860;
+  --over: #ff8a80; --near: #ffcc66; --ok: #8fd99c; --grey: #a9bfd4; }
 @media (prefers-color-scheme: dark) {
-  .app.screen-device { --ink: #f2f2f2; --paper: #101114; --muted: #b8b8b8; --line: #444; --over: #ff7b7b; --near: #ffc44d; --ok: #7fd691; }
+  .app.screen-device { --ink: #ecebe6; --paper: #101114; --surface: #1a1d22; --muted: #b4b6ba; --line: #3c414a; --accent: #f0a860;
+    --over: #ff8a80; --near: #ffcc66; --ok: #8fd99c; --grey: #a9bfd4; }
 }
-body { margin: 0; font: 18px/1.4 system-ui, sans-serif; }
-.app { min-height: 100vh; color: var(--ink); background: var(--paper); }
-a { color: var(--ink); }
-input[type=checkbox] { width: 44px; height: 44px; min-height: 44px; vertical-align: middle; margin: 4px 8px 4px 0; accent-color: var(--ink); }
-nav.back a, p > a, .card > a { display: inline-block; min-height: 44px; line-height: 44px; }
-main { padding: 12px 14px 80px; max-width: 720px; margin: 0 auto; }
-h1 { font-size: 24px; margin: 8px 0 12px; } h2 { font-size: 20px; margin: 18px 0 8px; }
+body { margin: 0; font: var(--t-body, 18px)/1.45 system-ui, sans-serif; }
+.app { min-height: 100vh; color: var(--ink); background: var(--paper); font-size: var(--t-body); }
+a { color: var(--ink); text-underline-offset: 3px; }
+input[type=checkbox] { width: 44px; height: 44px; min-height: 44px; vertical-align: middle; margin: 4px 8px 4px 0; accent-color: var(--accent); }
+nav.back a, nav.bar-action a, p > a, .card > a { display: inline-block; min-height: 44px; line-height: 44px; }
+main { padding: 0 var(--s4) 96px; max-width: 720px; margin: 0 auto; }
+.top-bar { position: sticky; top: 0; z-index: 6; margin: 0 calc(-1 * var(--s4)) var(--s3); padding: var(--s1) var(--s4) var(--s2);
+  background: var(--surface); border-bottom: 3px solid var(--accent); }
+.top-bar nav { font-size: var(--t-small); }
+.top-bar nav a { text-decoration: none; color: var(--accent); font-weight: 600; max-width: 100%; overflow: hidden; text-overflow: ellipsis; white-space: nowrap; }
+.top-bar h1 { font-size: var(--t-head); margin: 0; line-height: 1.25; overflow-wrap: anywhere; }
+.top-bar nav.bar-action { float: right; }
+h1 { font-size: var(--t-title); margin: var(--s2) 0 var(--s3); } h2 { font-size: var(--t-head); margin: var(--s5) 0 var(--s2); letter-spacing: 0.01em; }
 a, button, .tap { min-height: 48px; min-width: 48px; }
-button, .button { font: inherit; padding: 10px 16px; border-radius: 8px; border: 2px solid var(--ink); background: var(--ink); color: var(--paper); }
-button.quiet { background: transparent; color: var(--ink); }
-input, select, textarea { font: inherit; width: 100%; box-sizing: border-box; min-height: 48px; padding: 8px 10px; border: 2px solid var(--line); border-radius: 8px; background: var(--paper); color: var(--ink); }
-label { display: block; margin: 10px 0 4px; font-weight: 600; }
-.field-error { color: var(--over); font-weight: 600; }
-.checks label { display: flex; align-items: center; gap: 8px; font-weight: 400; min-height: 44px; margin: 0; }
+button, .button { font: inherit; padding: 10px 16px; border-radius: 10px; border: 2px solid var(--ink); background: var(--ink); color: var(--paper); font-weight: 600; }
+a.button { display: inline-flex; align-items: center; text-decoration: none; box-sizing: border-box; }
+button.quiet { background: transparent; color: var(--ink); border-color: var(--line); }
+button:disabled { opacity: 0.45; }
+input, select, textarea { font: inherit; width: 100%; box-sizing: border-box; min-height: 48px; padding: 8px 10px; border: 2px solid var(--line); border-radius: 10px; background: var(--surface); color: var(--ink); }
+input:focus, select:focus, textarea:focus { outline: 3px solid var(--accent); outline-offset: 1px; }
+label { display: block; margin: var(--s3) 0 var(--s1); font-weight: 600; font-size: var(--t-small); text-transform: none; }
+.field-error { color: var(--over); font-weight: 600; margin: var(--s1) 0 0; }
+.field-error::before { content: "\26A0  "; }
+.checks label { display: flex; align-items: center; gap: 8px; font-weight: 400; min-height: 44px; margin: 0; font-size: var(--t-body); }
 .checks input { width: 44px; min-height: 44px; margin: 0; flex: none; }
-figure.girder-view figcaption { font-size: 14px; color: var(--muted); }
+figure.girder-view figcaption { font-size: var(--t-small); color: var(--muted); }
 ul.findings-brief li { padding: 8px 0; border-bottom: 1px solid var(--line); }
-ul.list { list-style: none; padding: 0; margin: 0; }
-ul.list li a { display: block; padding: 12px 8px; border-bottom: 1px solid var(--line); color: var(--ink); text-decoration: none; }
-.muted { color: var(--muted); font-size: 15px; }
-.card { border: 2px solid var(--line); border-radius: 10px; padding: 10px 12px; margin: 12px 0; }
+ul.list:empty { display: none; }
+ul.list { list-style: none; padding: 0; margin: 0; background: var(--surface); border: 1px solid var(--line); border-radius: 12px; overflow: hidden; }
+ul.list li + li { border-top: 1px solid var(--line); }
+ul.list li a { display: block; padding: var(--s3) var(--s3); color: var(--ink); text-decoration: none; font-weight: 600; }
+ul.list li a::after { content: " \203A"; color: var(--muted); float: right; }
+.muted { color: var(--muted); font-size: var(--t-small); font-weight: 400; }
+.card { background: var(--surface); border: 1px solid var(--line); border-left: 6px solid var(--line); border-radius: 12px; padding: var(--s3) var(--s4); margin: var(--s3) 0; }
+.card:has(.status-over-limit), .card:has(.status-to-evaluate) { border-left-color: var(--over); }
+.card:has(.status-near-limit), .card:has(.status-incomplete) { border-left-color: var(--near); }
+.card:has(.status-within) { border-left-color: var(--ok); }
 .status { font-weight: 700; }
-.status-over-limit, .status-to-evaluate { color: var(--over); } .status-near-limit, .status-incomplete { color: var(--near); } .status-within { color: var(--ok); }
-.notice { font-size: 13px; padding: 4px 14px; color: var(--muted); border-bottom: 1px solid var(--line); }
-nav.back { margin: 4px 0; }
+.status-over-limit, .status-to-evaluate { color: var(--over); } .status-near-limit, .status-incomplete { color: var(--near); } .status-within { color: var(--ok); } .status-not-checked, .status-none { color: var(--grey); }
+.row-status::before { content: "\25CF  "; }
+.notice { font-size: var(--t-small); padding: var(--s2) var(--s3); color: var(--muted); border: 1px dashed var(--line); border-radius: 10px; }
 figure.side-view { margin: 8px 0; }
 .danger-zone { margin-top: 28px; border-top: 1px solid var(--line); padding-top: 8px; }
 button.danger { background: var(--over); border-color: var(--over); color: var(--paper); }
@@ -57,6 +80,7 @@ button + button { margin-left: 8px; }
 .walk-bar button { margin: 0; }
 .quick-observations { display: flex; flex-wrap: wrap; gap: 8px; }
 .quick-observations button { margin: 0; }
+details { margin: var(--s3) 0; }
 details > summary { min-height: 48px; display: flex; align-items: center; font-weight: 600; cursor: pointer; }
 .offscreen { position: absolute; left: -9999px; width: 1px; height: 1px; }
 .photo-picker { display: flex; flex-wrap: wrap; gap: 8px; margin: 8px 0; }

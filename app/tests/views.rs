@@ -56,7 +56,10 @@ fn inspection_list() {
     assert!(html.contains("2719 Quillback Road, Marrow Falls"), "{html}");
     assert!(html.contains("Zoë Ångström-Nguyễn"));
     assert!(html.contains("Start inspection"));
-    assert!(html.contains("screening tool") || html.contains("Screening tool"));
+    assert!(
+        !html.contains("screening tool"),
+        "the notice is said once, on the inspection screen"
+    );
 }
 
 #[test]
@@ -72,6 +75,17 @@ fn inspection_shows_areas_with_counts_over() {
         "{html}"
     );
     assert!(html.contains("over a limit or to be evaluated"));
+    assert!(
+        html.contains("A screening tool, not an engineering evaluation")
+            && html.contains("checked against the IRC 2018")
+            && html.contains("Local codes and amendments govern")
+            && html.contains("licensed professional"),
+        "the notice, with the edition used, once on the inspection screen"
+    );
+    assert!(
+        html.contains("row-status status-over-limit\">Over a limit"),
+        "each area row says its worst status in words"
+    );
 }
 
 #[test]

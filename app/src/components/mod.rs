@@ -13,6 +13,7 @@ mod row_status;
 mod side_view;
 mod status_badge;
 mod tape_input;
+mod top_bar;
 
 pub use autosave_fields::AutosaveFields;
 pub use framing_fields::{FieldChange, FramingFields};
@@ -27,3 +28,4 @@ pub use row_status::{worst_status, RowStatus};
 pub use side_view::SideViewSvg;
 pub use status_badge::StatusBadge;
 pub use tape_input::{pressed, TapeInput, TapeState};
+pub use top_bar::TopBar;

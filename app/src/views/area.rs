@@ -2,7 +2,7 @@
 //! one's values), a single member or a girder line; the conditions of the space, saved as
 //! they are picked.
 
-use crate::components::{worst_status, AutosaveFields, PathChange, Photos, RowStatus};
+use crate::components::{worst_status, AutosaveFields, PathChange, Photos, RowStatus, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -134,8 +134,7 @@ pub fn AreaView(id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::InspectionView { id: inspection.id.clone() }, "< {inspection.property.address}" } }
-            h1 { "{area.name}" }
+            TopBar { title: "{area.name}", Link { to: Route::InspectionView { id: inspection.id.clone() }, "‹ {inspection.property.address}" } }
             h2 { "Joist runs" }
             ul { class: "list",
                 for run in area.runs.iter() {

@@ -4,7 +4,7 @@
 
 use super::finding_route::route_of;
 use super::findings_filter::{shown, StatusFilter};
-use crate::components::{PhotoMessage, PhotoOutcome, PhotoPicker, StatusBadge};
+use crate::components::{PhotoMessage, PhotoOutcome, PhotoPicker, StatusBadge, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::priority::{default_priority, effective_priority, Priority};
@@ -122,8 +122,7 @@ pub fn Findings(id: String) -> Element {
     let within_count = within_rows.len();
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
-            h1 { "Findings" }
+            TopBar { title: "Findings", Link { to: Route::InspectionView { id: id.clone() }, "‹ {inspection.property.address}" } }
             if !evaluation.problems.is_empty() {
                 div { class: "card", id: "input-problems",
                     h2 { "Entries that could not be used" }

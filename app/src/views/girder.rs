@@ -4,6 +4,7 @@
 
 use crate::components::{
     worst_status, GirderSvg, PathChange, PathFields, Photos, RemoveButton, RowStatus, StatusBadge,
+    TopBar,
 };
 use crate::{use_app, Route};
 use dioxus::prelude::*;
@@ -115,8 +116,7 @@ pub fn GirderScreen(id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
-            h1 { "{line.label}" }
+            TopBar { title: "{line.label}", Link { to: Route::AreaView { id: area.id.clone() }, "‹ {area.name}" } }
             if let Some(view) = view {
                 GirderSvg { view }
             }

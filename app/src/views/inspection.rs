@@ -1,6 +1,6 @@
 //! One inspection: its areas, each with a count of what is over a limit; add an area.
 
-use crate::components::{worst_status, AutosaveFields, PathChange, RowStatus};
+use crate::components::{worst_status, AutosaveFields, PathChange, RowStatus, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{field_text, inspection_with, FieldError, INSPECTION_FIELDS};
@@ -99,9 +99,11 @@ pub fn InspectionView(id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::Inspections {}, "< Inspections" } }
-            h1 { "{inspection.property.address}" }
+            TopBar { title: "{inspection.property.address}", Link { to: Route::Inspections {}, "‹ Inspections" } }
             p { class: "muted", "{inspection.client.name} {inspection.date} {inspection.code_edition}" }
+            p { class: "notice", id: "screening-notice",
+                "A screening tool, not an engineering evaluation: findings are checked against the {inspection.code_edition} and wood mechanics. Local codes and amendments govern; refer structural concerns to a licensed professional."
+            }
             p { Link { to: Route::Findings { id: id.clone() }, id: "findings-link", "Findings: {total_over} over a limit, {to_evaluate} to be evaluated" } }
             p { Link { to: Route::ReportView { id: id.clone() }, id: "report-link", "Report" } }
             h2 { "Areas" }

@@ -61,8 +61,10 @@ pub fn Inspections() -> Element {
     };
     rsx! {
         main {
-            h1 { "Inspections" }
-            p { Link { to: Route::SettingsView {}, id: "settings-link", "Settings" } }
+            header { class: "top-bar",
+                nav { class: "bar-action", Link { to: Route::SettingsView {}, id: "settings-link", "Settings" } }
+                h1 { "Inspections" }
+            }
             input { r#type: "search", id: "search", placeholder: "Search address or client", value: "{search}", oninput: move |e| search.set(e.value()) }
             label {
                 input { r#type: "checkbox", id: "show-archived", checked: show_archived(), onchange: move |e| show_archived.set(e.checked()) }

@@ -2,7 +2,7 @@
 //! values) or a single member: its framing with the live check, its observations, photos.
 
 use crate::components::{
-    FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
+    FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton, TopBar,
 };
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
@@ -87,13 +87,12 @@ pub fn MemberView(id: String) -> Element {
         "this member"
     };
     let back = match &run {
-        Some(r) => rsx! { Link { to: Route::RunView { id: r.id.clone() }, "< {r.label}" } },
-        None => rsx! { Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } },
+        Some(r) => rsx! { Link { to: Route::RunView { id: r.id.clone() }, "‹ {r.label}" } },
+        None => rsx! { Link { to: Route::AreaView { id: area.id.clone() }, "‹ {area.name}" } },
     };
     rsx! {
         main {
-            nav { class: "back", {back} }
-            h1 { "{label}" }
+            TopBar { title: "{label}", {back} }
             if run.is_some() {
                 p { class: "muted", "A joist of this run: enter only what differs from the run." }
             }

@@ -1,7 +1,7 @@
 //! One observation: its fields laid out from core's field list, saved the moment they read,
 //! with the verdict and citation and the member's side view updating as it is typed.
 
-use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge, TapeInput};
+use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge, TapeInput, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{
@@ -98,8 +98,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: up.clone(), "< {up_name}" } }
-            h1 { "{title}" }
+            TopBar { title: "{title}", Link { to: up.clone(), "‹ {up_name}" } }
             for finding in verdict.iter() {
                 div { class: "card", id: "verdict",
                     StatusBadge { status: finding.status, label: finding.status_label().to_string(), use_text: finding.use_text() }

@@ -1,7 +1,7 @@
 //! One post under a girder line: its fields saved on every change, its findings (capacity,
 //! code minimums, decay protection, footing, what was seen), photos.
 
-use crate::components::{PathChange, PathFields, Photos, RemoveButton, StatusBadge};
+use crate::components::{PathChange, PathFields, Photos, RemoveButton, StatusBadge, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{field_text, post_with, FieldError, POST_FIELDS};
@@ -72,8 +72,7 @@ pub fn PostScreen(id: String) -> Element {
         .collect();
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::GirderScreen { id: line.id.clone() }, "< {line.label}" } }
-            h1 { "{post.label}" }
+            TopBar { title: "{post.label}", Link { to: Route::GirderScreen { id: line.id.clone() }, "‹ {line.label}" } }
             h2 { "Findings" }
             ul { class: "list findings-brief",
                 for (key, status, label, use_text, title, summary, recommendation) in findings {

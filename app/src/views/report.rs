@@ -1,5 +1,6 @@
 //! The report: build it with visible progress, then open it; earlier deliveries listed.
 
+use crate::components::TopBar;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::evaluate;
@@ -150,8 +151,7 @@ pub fn ReportView(id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::InspectionView { id: id.clone() }, "< {inspection.property.address}" } }
-            h1 { "Report" }
+            TopBar { title: "Report", Link { to: Route::InspectionView { id: id.clone() }, "‹ {inspection.property.address}" } }
             div { class: "card", id: "before-handover",
                 h2 { "Before you hand it over" }
                 if checklist.is_empty() {

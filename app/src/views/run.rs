@@ -3,7 +3,7 @@
 
 use crate::components::{
     worst_status, FieldChange, FramingFields, LiveCard, ObservationList, Photos, RemoveButton,
-    RowStatus,
+    RowStatus, TopBar,
 };
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
@@ -104,8 +104,7 @@ pub fn RunView(id: String) -> Element {
     };
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::AreaView { id: area.id.clone() }, "< {area.name}" } }
-            h1 { "{run.label}" }
+            TopBar { title: "{run.label}", Link { to: Route::AreaView { id: area.id.clone() }, "‹ {area.name}" } }
             LiveCard { check }
             if !girders.is_empty() {
                 h2 { "Bears on" }

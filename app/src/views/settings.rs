@@ -1,8 +1,10 @@
 //! Settings: the inspector, screen, units, code edition and default loads; saved as they
 //! change.
 
+use crate::components::TopBar;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
+use undercroft_core::forms::CODE_EDITIONS;
 use undercroft_core::model::RoomUse;
 use undercroft_core::store::{Screen, Settings};
 use undercroft_core::units::UnitSystem;
@@ -43,8 +45,7 @@ pub fn SettingsView() -> Element {
     let sleeping = s.room_use_above == RoomUse::Sleeping;
     rsx! {
         main {
-            nav { class: "back", Link { to: Route::Inspections {}, "< Inspections" } }
-            h1 { "Settings" }
+            TopBar { title: "Settings", Link { to: Route::Inspections {}, "‹ Inspections" } }
             label { r#for: "inspector-name", "Inspector" }
             input { id: "inspector-name", value: "{s.inspector_name}", oninput: move |e| save.call(("name", e.value())) }
             label { r#for: "company", "Company" }
@@ -63,7 +64,11 @@ pub fn SettingsView() -> Element {
                 option { value: "metric", selected: metric, "Millimetres" }
             }
             label { r#for: "edition", "Code edition" }
-            input { id: "edition", value: "{s.code_edition}", oninput: move |e| save.call(("edition", e.value())) }
+            select { id: "edition", onchange: move |e| save.call(("edition", e.value())),
+                for (value, text) in CODE_EDITIONS.iter() {
+                    option { value: "{value}", selected: s.code_edition == *value, "{text}" }
+                }
+            }
             label { r#for: "room", "Default rooms above" }
             select { id: "room", onchange: move |e| save.call(("room", e.value())),
                 option { value: "living", selected: !sleeping, "Living areas (40 psf)" }

@@ -3,7 +3,9 @@
 //! time something differs from the run); one tap opens an observation on it; "Next joist"
 //! steps one layout on, keeping the tape keypad open on the field being walked.
 
-use crate::components::{worst_status, FieldChange, FramingFields, LiveCard, RowStatus, TapeState};
+use crate::components::{
+    worst_status, FieldChange, FramingFields, LiveCard, RowStatus, TapeState, TopBar,
+};
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, AppState, Route};
 use dioxus::prelude::*;
@@ -218,16 +220,15 @@ fn WalkAt(run_id: String, at: f64) -> Element {
     let seen = here.as_ref().map_or(0, |j| j.observations.len());
     rsx! {
         main { class: "walk",
-            nav { class: "back", Link { to: Route::RunView { id: run_id.clone() }, "< {run.label}" } }
+            TopBar { title: "Joist walk", Link { to: Route::RunView { id: run_id.clone() }, "‹ {run.label}" } }
             div { class: "walk-bar",
-                button { class: "quiet", id: "walk-back", onclick: back, "< Back" }
+                button { class: "quiet", id: "walk-back", onclick: back, "‹ Back" }
                 div { class: "walk-place",
                     strong { id: "walk-place", "{walk_label(at, units)}" }
                     span { class: "muted", " joist {number}, {format_spacing(step, units)} on centre" }
                 }
-                button { id: "next-joist", onclick: next, "Next joist >" }
+                button { id: "next-joist", onclick: next, "Next joist ›" }
             }
-            h1 { "Walking {run.label}" }
             p { id: "walk-summary", RowStatus { status } " {summary}" }
             if seen > 0 {
                 p { class: "muted", "{seen} observations on this joist" }
