@@ -155,6 +155,15 @@ async function main() {
     hasTouch: true,
     deviceScaleFactor: 2,
   });
+  // A phone browser's share sheet, stood in for: headless Chromium on Linux has none. It
+  // keeps what it was handed, so the test reads the file the app shared.
+  await context.addInitScript(() => {
+    navigator.canShare = (data) => !!(data && data.files && data.files.length);
+    navigator.share = async (data) => {
+      const f = data.files[0];
+      window.__shared = { name: f.name, type: f.type, size: f.size };
+    };
+  });
   let { proc, url } = await startServer();
   const page = await context.newPage();
   currentPage = page;
@@ -294,6 +303,14 @@ async function main() {
   await page.locator("#report-path").waitFor({ timeout: 60000 });
   const pdfPath = (await page.locator("#report-path").innerText()).trim();
   assert.match(await page.locator("#report-progress").innerText(), /Report ready/);
+  // Shared through the share sheet: the very PDF, by name, type and size.
+  await page.locator("#share-report").tap();
+  await page.locator("#share-outcome").getByText("Handed to the share sheet").waitFor();
+  const shared = await page.evaluate(() => window.__shared);
+  assert.deepEqual(shared, { name: path.basename(pdfPath), type: "application/pdf", size: fs.statSync(pdfPath).size });
+  // The delivery says when, in local time, and who it went to (the client, as prefilled).
+  const delivery = await page.locator("li.delivery").first().innerText();
+  assert.match(delivery, /\d{4}-\d{2}-\d{2} \d{2}:\d{2} \(UTC[+-]\d{2}:\d{2}\), to Søren Ōkubo-Adeyemi/, delivery);
   await shot(page, "report");
   const pdf = fs.readFileSync(pdfPath);
   assert.equal(pdf.subarray(0, 5).toString(), "%PDF-");

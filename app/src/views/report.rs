@@ -1,11 +1,12 @@
 //! The report: build it with visible progress, then open it; earlier deliveries listed.
 
-use crate::components::TopBar;
+use crate::components::{SharePdf, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::evaluate;
 use undercroft_core::report::readiness::before_handover;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+use undercroft_core::store::local_time;
 
 /// Lets the screen draw the progress line before the next step runs.
 async fn yield_now() {
@@ -60,6 +61,14 @@ pub fn ReportView(id: String) -> Element {
     let Some(inspection) = inspection else {
         return rsx! { main { p { "This inspection is not in the store." } } };
     };
+    let client = inspection.client.clone();
+    let mut recipient = use_signal(move || {
+        if client.email.trim().is_empty() {
+            client.name.clone()
+        } else {
+            format!("{} <{}>", client.name, client.email)
+        }
+    });
     // What to look at before handing the report over.
     let checklist = {
         let with_images: std::collections::HashSet<String> = app
@@ -124,9 +133,9 @@ pub fn ReportView(id: String) -> Element {
                     Ok(()) => {
                         let findings =
                             serde_json::to_string(&evaluation.findings).unwrap_or_default();
-                        match app
-                            .change(|s| s.record_report(&inspection.id, &name, &bytes, &findings))
-                        {
+                        match app.change(|s| {
+                            s.record_report(&inspection.id, &name, &bytes, &findings, &recipient())
+                        }) {
                             Ok(_) => {
                                 let plural = |n: usize, one: &str, many: &str| {
                                     format!("{n} {}", if n == 1 { one } else { many })
@@ -175,13 +184,19 @@ pub fn ReportView(id: String) -> Element {
                     " Include the computed repair options (for a contractor or engineer reader)"
                 }
             }
+            label { r#for: "recipient", "Goes to (kept with the delivery)" }
+            input { id: "recipient", value: "{recipient}", oninput: move |e| recipient.set(e.value()) }
             p { button { id: "build-report", onclick: build, "Build the report" } }
             if let Some(line) = progress() {
                 p { id: "report-progress", role: "status", "{line}" }
             }
             if let Some(path) = built() {
                 p { id: "report-path", class: "muted", "{path.display()}" }
-                button { class: "quiet", onclick: move |_| { let _ = open_file(&path); }, "Open the PDF" }
+                button { class: "quiet", onclick: {
+                    let path = path.clone();
+                    move |_| { let _ = open_file(&path); }
+                }, "Open the PDF" }
+                SharePdf { path: path.clone() }
             }
             h2 { "Delivered" }
             if deliveries.is_empty() {
@@ -189,7 +204,16 @@ pub fn ReportView(id: String) -> Element {
             }
             ul { class: "list",
                 for d in deliveries {
-                    li { key: "{d.id}", span { "{d.file_name}" } br {} span { class: "muted", "{d.delivered_at}, {d.bytes} bytes, SHA-256 {short_hash(&d.sha256)}" } }
+                    li { key: "{d.id}", class: "delivery",
+                        span { "{d.file_name}" }
+                        br {}
+                        span { class: "delivered-when", "{local_time(&d.delivered_at)}" }
+                        if !d.recipient.is_empty() {
+                            span { class: "delivered-to", ", to {d.recipient}" }
+                        }
+                        br {}
+                        span { class: "muted", "{d.bytes} bytes, SHA-256 {short_hash(&d.sha256)}" }
+                    }
                 }
             }
         }

@@ -35,6 +35,10 @@ const MIGRATIONS: &[Migration] = &[
         sql: include_str!("../../../migrations/0006_joist_position.sql"),
         after: None,
     },
+    Migration {
+        sql: include_str!("../../../migrations/0007_recipient_and_marks.sql"),
+        after: None,
+    },
 ];
 
 /// The `application_id` a store of ours carries from version 3 ("UNDC").

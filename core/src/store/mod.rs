@@ -15,7 +15,7 @@ mod settings;
 mod tree;
 
 pub use bundle::{BundleError, ImportOutcome};
-pub use clock::now_utc;
+pub use clock::{local_time, now_utc};
 pub use files::write_durably;
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::{APPLICATION_ID, SCHEMA_VERSION};

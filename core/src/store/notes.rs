@@ -32,6 +32,8 @@ pub struct DeliveredReport {
     pub file_name: String,
     pub sha256: String,
     pub bytes: u64,
+    /// Who it went to, in the inspector's words (a name or an address); empty if not said.
+    pub recipient: String,
 }
 
 impl Store {
@@ -78,13 +80,15 @@ impl Store {
         Ok(rows.collect::<rusqlite::Result<_>>()?)
     }
 
-    /// Records a delivered report: its file name, hash and size, and the findings as delivered.
+    /// Records a delivered report: its file name, hash and size, who it went to, and the
+    /// findings as delivered.
     pub fn record_report(
         &mut self,
         inspection_id: &str,
         file_name: &str,
         pdf: &[u8],
         findings_json: &str,
+        recipient: &str,
     ) -> Result<DeliveredReport> {
         let report = DeliveredReport {
             id: new_id(),
@@ -92,11 +96,12 @@ impl Store {
             file_name: file_name.into(),
             sha256: content_hash(pdf),
             bytes: pdf.len() as u64,
+            recipient: recipient.trim().into(),
         };
         self.edit(inspection_id, |tx| {
             tx.execute(
-                "INSERT INTO reports (id, inspection_id, delivered_at, file_name, sha256, bytes, findings) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)",
-                params![report.id, inspection_id, report.delivered_at, report.file_name, report.sha256, report.bytes as i64, findings_json],
+                "INSERT INTO reports (id, inspection_id, delivered_at, file_name, sha256, bytes, findings, recipient) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)",
+                params![report.id, inspection_id, report.delivered_at, report.file_name, report.sha256, report.bytes as i64, findings_json, report.recipient],
             )?;
             Ok(())
         })?;
@@ -106,7 +111,7 @@ impl Store {
     /// Delivered reports, newest first.
     pub fn reports(&self, inspection_id: &str) -> Result<Vec<DeliveredReport>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT id, delivered_at, file_name, sha256, bytes FROM reports WHERE inspection_id = ?1 ORDER BY delivered_at DESC, id DESC",
+            "SELECT id, delivered_at, file_name, sha256, bytes, recipient FROM reports WHERE inspection_id = ?1 ORDER BY delivered_at DESC, id DESC",
         )?;
         let rows = stmt.query_map([inspection_id], |r| {
             Ok(DeliveredReport {
@@ -115,6 +120,7 @@ impl Store {
                 file_name: r.get(2)?,
                 sha256: r.get(3)?,
                 bytes: r.get::<_, i64>(4)? as u64,
+                recipient: r.get(5)?,
             })
         })?;
         Ok(rows.collect::<rusqlite::Result<_>>()?)

@@ -679,9 +679,16 @@ fn notes_and_reports() {
         .unwrap();
     assert!(store.finding_notes(&demo.id).unwrap().is_empty());
     let r = store
-        .record_report(&demo.id, "report.pdf", b"%PDF-1.7 ...", "[]")
+        .record_report(
+            &demo.id,
+            "report.pdf",
+            b"%PDF-1.7 ...",
+            "[]",
+            " Zoë Ångström-Nguyễn <zoe@example.org> ",
+        )
         .unwrap();
     assert_eq!(r.sha256.len(), 64);
+    assert_eq!(r.recipient, "Zoë Ångström-Nguyễn <zoe@example.org>");
     assert_eq!(store.reports(&demo.id).unwrap(), [r]);
     assert_eq!(store.integrity_check().unwrap(), "ok");
 }

@@ -31,6 +31,9 @@ pub struct ReportArgs {
     /// engineer reader; left out of the client's report by default.
     #[arg(long)]
     repair_options: bool,
+    /// Who the report goes to (a name or an address), kept with the delivery record.
+    #[arg(long, default_value = "")]
+    to: String,
 }
 
 pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()> {
@@ -104,6 +107,7 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
             name,
             &bytes,
             &serde_json::to_string(&evaluation.findings)?,
+            &args.to,
         )?;
     }
     println!("wrote {} ({} bytes)", args.output.display(), bytes.len());
