@@ -5,6 +5,7 @@
 use std::collections::HashSet;
 use std::path::Path;
 use undercroft_core::interchange::from_json;
+use undercroft_core::model::PhotoMark;
 use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
 use undercroft_core::store::{FindingNote, Store};
 use undercroft_core::{evaluate, Inspection};
@@ -351,4 +352,114 @@ fn every_promised_script_reads_back() {
         text.contains("Notched for a drain line."),
         "observation notes reach the report"
     );
+}
+
+/// Pixels of the marks' colour (bright yellow) on every page, rendered at 30 dpi.
+fn mark_pixels(pdf_bytes: &[u8], dir: &Path, name: &str) -> usize {
+    let pdf_path = dir.join(format!("{name}.pdf"));
+    std::fs::write(&pdf_path, pdf_bytes).unwrap();
+    let prefix = dir.join(name);
+    tool(
+        "pdftoppm",
+        &[
+            "-r".as_ref(),
+            "30".as_ref(),
+            "-png".as_ref(),
+            pdf_path.as_os_str(),
+            prefix.as_os_str(),
+        ],
+    );
+    let mut count = 0;
+    for entry in std::fs::read_dir(dir).unwrap() {
+        let path = entry.unwrap().path();
+        let is_page = path
+            .file_name()
+            .and_then(|n| n.to_str())
+            .is_some_and(|n| n.starts_with(&format!("{name}-")) && n.ends_with(".png"));
+        if is_page {
+            let page = image::open(&path).unwrap().to_rgb8();
+            count += page
+                .pixels()
+                .filter(|p| p[0] > 225 && p[1] > 170 && p[1] < 235 && p[2] < 70)
+                .count();
+        }
+    }
+    count
+}
+
+#[test]
+fn marks_are_drawn_over_the_photo_and_its_file_is_untouched() {
+    let dir = TempDir::new("report-marks");
+    let (mut store, inspection) = demo_store(&dir.0);
+    let photo = store
+        .photos_of("obs-k7-notch")
+        .unwrap()
+        .into_iter()
+        .find(|p| p.caption.starts_with("Notch at the drain line"))
+        .unwrap();
+    let file = photo.report_path.clone().unwrap();
+    let stored = std::fs::read(&file).unwrap();
+    let plain = render(&store, &inspection, Paper::Letter);
+    let marks = vec![
+        PhotoMark::Circle {
+            centre: [0.5, 0.5],
+            radius: 0.2,
+        },
+        PhotoMark::Arrow {
+            from: [0.1, 0.1],
+            to: [0.4, 0.4],
+        },
+        PhotoMark::Dimension {
+            from: [0.2, 0.85],
+            to: [0.8, 0.85],
+            label: "2-1/2\"".into(),
+        },
+    ];
+    store.set_photo_marks(&photo.id, &marks).unwrap();
+    let inspection = store.load_inspection(&inspection.id).unwrap();
+    let marked = render(&store, &inspection, Paper::Letter);
+    let (before, after) = (
+        mark_pixels(&plain, &dir.0, "plain"),
+        mark_pixels(&marked, &dir.0, "marked"),
+    );
+    assert!(
+        after > before + 40,
+        "the marks are drawn: {before} mark-coloured pixels before, {after} after"
+    );
+    assert_eq!(
+        std::fs::read(&file).unwrap(),
+        stored,
+        "the photo's file is as taken"
+    );
+    // pdfimages -list: page, size, encoding and bytes of each image (not its object number).
+    let list = |pdf_bytes: &[u8], name: &str| {
+        let path = dir.0.join(format!("{name}-list.pdf"));
+        std::fs::write(&path, pdf_bytes).unwrap();
+        let mut rows: Vec<String> = tool("pdfimages", &["-list".as_ref(), path.as_os_str()])
+            .lines()
+            .skip(2)
+            .map(|l| {
+                let f: Vec<&str> = l.split_whitespace().collect();
+                format!("{} {} {} {} {}", f[0], f[3], f[4], f[8], f[14])
+            })
+            .collect();
+        rows.sort();
+        rows
+    };
+    assert_eq!(
+        list(&plain, "plain"),
+        list(&marked, "marked"),
+        "the same images, embedded as they were: the marks are a layer over them"
+    );
+    let text = normalise(&tool_text(&marked, &dir.0));
+    assert!(
+        text.contains("2-1/2\""),
+        "the dimension's label is in the report"
+    );
+}
+
+fn tool_text(pdf_bytes: &[u8], dir: &Path) -> String {
+    let path = dir.join("text.pdf");
+    std::fs::write(&path, pdf_bytes).unwrap();
+    tool("pdftotext", &[path.as_os_str(), "-".as_ref()])
 }

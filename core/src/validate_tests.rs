@@ -199,6 +199,7 @@ fn photo_references_outside_the_inspection_are_problems() {
         file: file.into(),
         attached_to: owner.into(),
         caption: String::new(),
+        marks: vec![],
     };
     i.photos = vec![
         photo("p1", "photos/a.jpg", "m"),

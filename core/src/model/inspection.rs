@@ -298,6 +298,9 @@ pub struct PhotoRef {
     pub attached_to: String,
     #[serde(default)]
     pub caption: String,
+    /// Arrows, circles and dimensions drawn over the photo in the report; the file is as taken.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub marks: Vec<super::PhotoMark>,
 }
 
 #[cfg(test)]

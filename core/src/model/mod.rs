@@ -7,6 +7,7 @@ mod framing;
 mod inspection;
 mod load;
 mod load_path;
+mod marks;
 mod observation;
 pub mod renumber;
 mod site;
@@ -24,6 +25,7 @@ pub use load_path::{
     Footing, GirderKind, GirderLine, PlyFastening, PointLoad, Post, PostBase, PostCondition,
     PostHold, PostMaterial, SoilClass,
 };
+pub use marks::{marks_problem, PhotoMark, Spot, MOST_MARKS};
 pub use observation::{
     CantileverLoad, DamageCause, Edge, End, Observation, ObservationKind, SagReading,
 };

@@ -44,6 +44,7 @@ impl<'i, 'a> AreaWork<'i, 'a> {
             number,
             caption: p.caption.clone(),
             file: self.input.photo_files.get(&p.id).cloned(),
+            marks: p.marks.clone(),
         }
     }
 

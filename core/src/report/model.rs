@@ -180,6 +180,9 @@ pub struct Figure {
     pub caption: String,
     /// The stored report-size JPEG, when it is on this device.
     pub file: Option<PathBuf>,
+    /// Arrows, circles and dimensions drawn over the image.
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub marks: Vec<crate::model::PhotoMark>,
 }
 
 #[derive(Debug, Clone, PartialEq, Serialize)]

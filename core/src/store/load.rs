@@ -211,17 +211,26 @@ impl Store {
 
     fn photo_refs(&self, inspection_id: &str) -> Result<Vec<PhotoRef>> {
         let mut stmt = self.conn.prepare_cached(
-            "SELECT id, file, attached_to, caption FROM photos WHERE inspection_id = ?1 ORDER BY position, id",
+            "SELECT id, file, attached_to, caption, marks FROM photos WHERE inspection_id = ?1 ORDER BY position, id",
         )?;
         let rows = stmt.query_map([inspection_id], |r| {
-            Ok(PhotoRef {
-                id: r.get(0)?,
-                file: r.get(1)?,
-                attached_to: r.get(2)?,
-                caption: r.get(3)?,
-            })
+            Ok((
+                PhotoRef {
+                    id: r.get(0)?,
+                    file: r.get(1)?,
+                    attached_to: r.get(2)?,
+                    caption: r.get(3)?,
+                    marks: vec![],
+                },
+                r.get::<_, String>(4)?,
+            ))
         })?;
-        Ok(rows.collect::<rusqlite::Result<_>>()?)
+        rows.map(|row| {
+            let (mut photo, marks) = row?;
+            photo.marks = serde_json::from_str(&marks)?;
+            Ok(photo)
+        })
+        .collect()
     }
 }
 

@@ -5,9 +5,9 @@ use super::clock::now_utc;
 use super::files::{content_hash, Kind};
 use super::inspections::found;
 use super::{KeepOriginals, Result, Store, StoreError};
-use crate::model::PhotoRef;
+use crate::model::{marks_problem, PhotoMark, PhotoRef};
 use crate::photo::{self, sniff};
-use rusqlite::params;
+use rusqlite::{params, OptionalExtension};
 use std::collections::HashSet;
 use std::path::PathBuf;
 
@@ -190,6 +190,7 @@ impl Store {
             file,
             attached_to: attached_to.into(),
             caption: caption.into(),
+            marks: vec![],
         })
     }
 
@@ -216,6 +217,37 @@ impl Store {
             return Ok(None);
         }
         Ok(photo::jpeg_size(&std::fs::read(report)?).ok())
+    }
+
+    /// Replaces the marks drawn on a photo (an empty list clears them). Marks that cannot be
+    /// kept are refused in words and nothing changes.
+    pub fn set_photo_marks(&mut self, photo_id: &str, marks: &[PhotoMark]) -> Result<()> {
+        if let Some(why) = marks_problem(marks) {
+            return Err(StoreError::Invalid(why));
+        }
+        let inspection_id = self.inspection_of(photo_id)?;
+        let text = serde_json::to_string(marks)?;
+        self.edit(&inspection_id, |tx| {
+            found(
+                tx.execute(
+                    "UPDATE photos SET marks = ?2 WHERE id = ?1",
+                    params![photo_id, text],
+                )?,
+                photo_id,
+            )
+        })
+    }
+
+    /// The marks drawn on a photo.
+    pub fn photo_marks(&self, photo_id: &str) -> Result<Vec<PhotoMark>> {
+        let text: String = self
+            .conn
+            .query_row("SELECT marks FROM photos WHERE id = ?1", [photo_id], |r| {
+                r.get(0)
+            })
+            .optional()?
+            .ok_or_else(|| StoreError::NotFound(photo_id.into()))?;
+        Ok(serde_json::from_str(&text)?)
     }
 
     pub fn set_photo_caption(&mut self, photo_id: &str, caption: &str) -> Result<()> {

@@ -274,10 +274,13 @@ pub fn insert_photo_ref(
         .next()
         .and_then(|name| name.split('.').next())
         .filter(|h| super::files::is_hash(h));
+    if let Some(why) = crate::model::marks_problem(&p.marks) {
+        return Err(super::StoreError::Invalid(format!("photo {}: {why}", p.id)));
+    }
     tx.execute(
-        "INSERT INTO photos (id, inspection_id, attached_to, position, caption, file, content_hash, created_at)
-         VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)",
-        params![p.id, inspection_id, p.attached_to, position, p.caption, p.file, hash, created_at],
+        "INSERT INTO photos (id, inspection_id, attached_to, position, caption, file, content_hash, created_at, marks)
+         VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9)",
+        params![p.id, inspection_id, p.attached_to, position, p.caption, p.file, hash, created_at, serde_json::to_string(&p.marks)?],
     )?;
     Ok(())
 }

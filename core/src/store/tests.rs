@@ -487,13 +487,32 @@ fn bundles_round_trip_and_import_once() {
     let mut plain = demo.clone();
     plain.photos.clear();
     store.import_inspection(&plain).unwrap();
-    store
+    let notch_photo = store
         .add_photo(
             "obs-k7-notch",
             &camera_jpeg(&upright_scene(1800, 1200), 3),
             "notch",
         )
         .unwrap();
+    // Marks drawn on it travel with it, as their own layer.
+    let marks = vec![
+        crate::model::PhotoMark::Arrow {
+            from: [0.2, 0.2],
+            to: [0.45, 0.5],
+        },
+        crate::model::PhotoMark::Dimension {
+            from: [0.3, 0.7],
+            to: [0.6, 0.7],
+            label: "2\"".into(),
+        },
+    ];
+    store.set_photo_marks(&notch_photo.id, &marks).unwrap();
+    let bad = [crate::model::PhotoMark::Circle {
+        centre: [0.5, 0.5],
+        radius: -1.0,
+    }];
+    assert!(store.set_photo_marks(&notch_photo.id, &bad).is_err());
+    assert_eq!(store.photo_marks(&notch_photo.id).unwrap(), marks);
     store
         .add_photo(
             "area-base",
@@ -523,6 +542,7 @@ fn bundles_round_trip_and_import_once() {
         fresh.export_inspection(&demo.id).unwrap(),
         store.export_inspection(&demo.id).unwrap()
     );
+    assert_eq!(fresh.photo_marks(&notch_photo.id).unwrap(), marks);
     assert_eq!(
         fresh.finding_notes(&demo.id).unwrap(),
         store.finding_notes(&demo.id).unwrap()

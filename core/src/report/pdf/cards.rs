@@ -3,6 +3,7 @@
 
 use super::draw::side_view;
 use super::fonts::{self, Face};
+use super::marks_draw::{draw_marks, ImageBox};
 use super::sections::{caption, heading, BODY, SMALL};
 use super::writer::{Writer, INK, MARGIN, MUTED};
 use crate::report::{AreaSection, CheckedRow, Figure, NotedRow};
@@ -183,6 +184,13 @@ pub fn image_at(w: &mut Writer, f: &Figure, x: f32, top: f32, max_w: f32, max_h:
                 (max_w, max_w * aspect)
             };
             w.place_image(id, px_w, x, top - ih, iw);
+            let area = ImageBox {
+                x,
+                bottom: top - ih,
+                width: iw,
+                height: ih,
+            };
+            draw_marks(w, &f.marks, area);
             ih
         }
         None => {

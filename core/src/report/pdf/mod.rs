@@ -6,6 +6,7 @@ mod cards;
 mod draw;
 mod fonts;
 mod girder_draw;
+mod marks_draw;
 mod scripts;
 mod sections;
 mod writer;
