@@ -87,5 +87,15 @@ details > summary { min-height: 48px; display: flex; align-items: center; font-w
 .photo-picker label.button { display: inline-flex; align-items: center; margin: 0; box-sizing: border-box; min-height: 48px; }
 label.button.quiet { background: transparent; color: var(--ink); }
 .undo-bar { display: flex; align-items: center; justify-content: space-between; gap: 8px; border: 2px solid var(--ink); border-radius: 10px; padding: 6px 10px; margin: 8px 0; }
+.mark-canvas { position: relative; line-height: 0; }
+.mark-canvas img { width: 100%; display: block; }
+.mark-canvas svg { position: absolute; inset: 0; width: 100%; height: 100%; cursor: crosshair; touch-action: manipulation; }
+.mark-canvas svg * { pointer-events: none; }
+.mark { fill: none; stroke: #ffd10d; stroke-width: 3px; vector-effect: non-scaling-stroke; stroke-linecap: round; paint-order: stroke; filter: drop-shadow(0 0 1px #000); }
+.mark-label { fill: #ffd10d; font-size: 6px; font-weight: 700; text-anchor: middle; paint-order: stroke; stroke: #111; stroke-width: 1px; }
+.mark-first { fill: #ffd10d; stroke: #111; stroke-width: 0.5px; }
+.mark-tools, .mark-actions { display: flex; flex-wrap: wrap; gap: 8px; margin: 8px 0; }
+.mark-tools button, .mark-actions button { margin: 0; }
+button.chosen { background: var(--accent); border-color: var(--accent); color: var(--paper); }
 .row-status { font-weight: 700; font-size: 15px; }
 "#;

@@ -265,6 +265,23 @@ async function main() {
   await page.locator("#undo-remove").tap();
   await page.getByText("Photo put back").waitFor();
   await page.locator(".photos img").first().waitFor();
+  // Marks on the photo, two taps each: an arrow at the notch, a dimension of its depth.
+  await page.locator(".photos .mark-toggle").tap();
+  const surface = page.locator(".mark-surface");
+  // Taps are read once the surface listens.
+  await page.locator(".mark-surface[data-ready]").waitFor();
+  const box = await surface.boundingBox();
+  await surface.tap({ position: { x: box.width * 0.2, y: box.height * 0.2 } });
+  await surface.tap({ position: { x: box.width * 0.6, y: box.height * 0.55 } });
+  await page.locator("#mark-count").getByText("1 mark.").waitFor();
+  await page.locator("#mark-tool-dimension").tap();
+  await page.locator("#mark-label").fill(`1-7/8"`);
+  await surface.tap({ position: { x: box.width * 0.3, y: box.height * 0.8 } });
+  await surface.tap({ position: { x: box.width * 0.7, y: box.height * 0.8 } });
+  await page.locator("#mark-count").getByText("2 marks.").waitFor();
+  assert.equal(await surface.locator("polyline").count(), 3, "an arrow (shaft and head) and a dimension");
+  await shot(page, "observation-marks");
+  await page.locator(".photos .mark-toggle").tap();
   await shot(page, "observation");
 
   console.log("findings: both, with citations");
@@ -321,6 +338,7 @@ async function main() {
   const text = execFileSync("pdftotext", [pdfPath, "-"]).toString();
   assert.ok(text.includes(ADDRESS), "the address is in the PDF");
   assert.ok(text.includes("R502.8.1"), "the notch citation is in the PDF");
+  assert.ok(text.includes(`1-7/8"`), "the dimension marked on the notch's photo is drawn in the PDF");
   const watch = text.indexOf("Owner to watch");
   assert.ok(watch > 0 && text.indexOf("Notch in a sawn joist", watch) > watch, "the notch is under Owner to watch");
   assert.ok(text.includes("Repair option"), "the repair options asked for are in the PDF");

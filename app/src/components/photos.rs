@@ -7,6 +7,7 @@
 //! renderer tried (desktop webview, liveview, web), where the framework's own file events
 //! gave names without bytes.
 
+use super::MarkEditor;
 use crate::use_app;
 use base64::Engine;
 use dioxus::prelude::*;
@@ -200,11 +201,16 @@ fn PhotoRow(
     let (up_id, down_id, remove_id, caption_id) = (id.clone(), id.clone(), id.clone(), id.clone());
     let (up_app, down_app, remove_app) = (app.clone(), app.clone(), app.clone());
     let mut problem = use_signal(|| None::<String>);
+    let mut marking = use_signal(|| false);
+    let marks_id = id.clone();
     rsx! {
         div { class: "card photo",
-            if !data.is_empty() {
+            if marking() {
+                MarkEditor { photo_id: marks_id, image: data.clone() }
+            } else if !data.is_empty() {
                 img { src: "data:image/jpeg;base64,{data}", alt: "{caption}", style: "max-width:100%" }
             }
+            button { class: "quiet mark-toggle", onclick: move |_| marking.toggle(), if marking() { "Done marking" } else { "Mark it: arrow, circle, dimension" } }
             input { value: "{caption}", placeholder: "Caption", oninput: move |e| { let _ = app.change(|s| s.set_photo_caption(&caption_id, &e.value())); } }
             button { class: "quiet", disabled: index == 0, onclick: move |_| { let _ = up_app.change(|s| s.move_to(&up_id, index.saturating_sub(1))); }, "Earlier" }
             button { class: "quiet", disabled: index + 1 == count, onclick: move |_| { let _ = down_app.change(|s| s.move_to(&down_id, index + 1)); }, "Later" }
