@@ -61,7 +61,15 @@ data="$work/home/.local/share/undercroft"
 [ -f "$data/undercroft.sqlite" ] || fail "no store in $data"
 [ -d "$data/webview" ] || fail "the webview's data is not in $data/webview"
 if [ -x "$cli" ]; then
-  "$cli" --db "$data/undercroft.sqlite" list | grep -q "Quillback" || fail "the demo inspection is not in the store"
+  # The demo of a first launch is imported after the first screen is up: wait for it to be in
+  # the store (its own commit), then check the screen shows it.
+  found=""
+  for _ in $(seq 300); do
+    if "$cli" --db "$data/undercroft.sqlite" list 2>/dev/null | grep -q "Quillback"; then found=1; break; fi
+    kill -0 "$app_pid" 2>/dev/null || fail "the app exited while importing the demo"
+    sleep 0.1
+  done
+  [ -n "$found" ] || fail "the demo inspection is not in the store within 30 s"
 fi
 for stray in "$work/home/.local/share/undercroft-app" "$work/home/.cache/undercroft-app"; do
   [ ! -e "$stray" ] || fail "the webview wrote outside the app's data folder: $stray"

@@ -6,7 +6,9 @@
 //! Run with `cargo bench -p undercroft-app --bench field_save`.
 
 use std::time::{Duration, Instant};
-use undercroft_app::edits::{save_framing_field, FramingEdit, FramingOwner};
+use undercroft_app::edits::{
+    save_area_field, save_framing_field, save_header_field, FramingEdit, FramingOwner,
+};
 use undercroft_app::startup::DEMO_INSPECTION;
 use undercroft_core::forms::{live_check, FramingForm};
 use undercroft_core::store::Store;
@@ -77,5 +79,27 @@ fn main() {
     }
     summary("field change to durable save", saves);
     summary("next render's work (reload + live check)", renders);
+
+    // The inspection's header and an area's loads, edited after creation, saved the same way.
+    let address = "12 Rue des Érables, Québec";
+    let mut header = Vec::new();
+    let mut area_saves = Vec::new();
+    for _ in 0..rounds {
+        for end in address.char_indices().map(|(i, _)| i).skip(1) {
+            let start = Instant::now();
+            save_header_field(&mut store, DEMO_ID, "property.address", &address[..end])
+                .expect("header saved");
+            header.push(start.elapsed());
+        }
+        for text in ["4", "40", "45", "50"] {
+            let start = Instant::now();
+            save_area_field(&mut store, "area-crawl", "loads.live_psf", text)
+                .or_else(|e| if e.field == "save" { Err(e) } else { Ok(()) })
+                .expect("area saved");
+            area_saves.push(start.elapsed());
+        }
+    }
+    summary("header field change to durable save", header);
+    summary("area field change to durable save", area_saves);
     std::fs::remove_dir_all(&dir).ok();
 }

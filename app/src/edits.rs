@@ -2,7 +2,9 @@
 //! (and the field-to-save benchmark measures): the form updated, what reads saved at once,
 //! a field that does not read yet keeping its stored value, and each field's problem returned.
 
-use undercroft_core::forms::{framing_question, keep_stored, FieldError, FramingForm, Question};
+use undercroft_core::forms::{
+    area_with, framing_question, inspection_with, keep_stored, FieldError, FramingForm, Question,
+};
 use undercroft_core::model::Framing;
 use undercroft_core::store::{Result, Store};
 use undercroft_core::units::UnitSystem;
@@ -75,6 +77,53 @@ pub fn save_framing_field(
         FramingOwner::Member { id, label, .. } => store.update_member(id, label, &framing)?,
     }
     Ok(FieldCheck { errors, question })
+}
+
+/// A failed save, said under the fields.
+fn not_saved(message: String) -> FieldError {
+    FieldError {
+        field: "save",
+        message,
+    }
+}
+
+/// One field of the inspection's header changed (its name as in `INSPECTION_FIELDS`): the
+/// stored inspection read fresh, the field set, the header rewritten durably; or the
+/// field's problem in words, nothing changed.
+pub fn save_header_field(
+    store: &mut Store,
+    inspection_id: &str,
+    name: &str,
+    text: &str,
+) -> std::result::Result<(), FieldError> {
+    let current = store
+        .load_inspection(inspection_id)
+        .map_err(|e| not_saved(e.to_string()))?;
+    let next = inspection_with(&current, name, text)?;
+    store
+        .update_header(&next)
+        .map_err(|e| not_saved(e.to_string()))
+}
+
+/// One of an area's own fields changed (its name as in `AREA_FIELDS`), as the header.
+pub fn save_area_field(
+    store: &mut Store,
+    area_id: &str,
+    name: &str,
+    text: &str,
+) -> std::result::Result<(), FieldError> {
+    let inspection = store
+        .inspection_of(area_id)
+        .and_then(|i| store.load_inspection(&i))
+        .map_err(|e| not_saved(e.to_string()))?;
+    let area = inspection
+        .area(area_id)
+        .ok_or_else(|| not_saved("this area is no longer in the store".into()))?;
+    let units = inspection.units;
+    let next = area_with(area, name, text, units)?;
+    store
+        .update_area(&next)
+        .map_err(|e| not_saved(e.to_string()))
 }
 
 #[cfg(test)]

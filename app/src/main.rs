@@ -9,7 +9,7 @@
 use dioxus::desktop::{Config, LogicalSize, WindowBuilder};
 use dioxus::prelude::*;
 use std::time::Instant;
-use undercroft_app::startup::{prepare_store, root_from_context, StorePath};
+use undercroft_app::startup::{prepare_store, root_from_context, wants_demo, DemoLater, StorePath};
 use undercroft_core::store::Store;
 
 static STARTED: std::sync::OnceLock<Instant> = std::sync::OnceLock::new();
@@ -55,10 +55,13 @@ fn main() {
         eprintln!("undercroft-app: no data folder found for the store; set UNDERCROFT_DB");
         std::process::exit(2);
     };
-    if let Err(e) = prepare_store(&db, true) {
+    // The store is opened (and migrated) before the window; the demo of a first launch is
+    // imported after the first screen is up, on its own thread.
+    if let Err(e) = prepare_store(&db, false) {
         eprintln!("undercroft-app: {e}");
         std::process::exit(1);
     }
+    let demo_later = wants_demo(&db).unwrap_or(false);
     let data_dir = db
         .parent()
         .map(std::path::Path::to_path_buf)
@@ -85,8 +88,11 @@ fn main() {
         .with_window(window)
         .with_menu(None)
         .with_data_directory(&webview_dir);
-    dioxus::LaunchBuilder::desktop()
+    let mut launch = dioxus::LaunchBuilder::desktop()
         .with_cfg(config)
-        .with_context(StorePath(db.display().to_string()))
-        .launch(desktop_root);
+        .with_context(StorePath(db.display().to_string()));
+    if demo_later {
+        launch = launch.with_context(DemoLater(db.display().to_string()));
+    }
+    launch.launch(desktop_root);
 }

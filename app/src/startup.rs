@@ -44,40 +44,92 @@ const DEMO_PHOTOS: [(&str, &[u8]); 7] = [
 /// Opens (or creates) the store at `db`; when `with_demo` is set and the store holds no
 /// inspection yet, puts the demo inspection in it.
 pub fn prepare_store(db: &Path, with_demo: bool) -> Result<(), String> {
-    let mut store =
+    let store =
         Store::open(db).map_err(|e| format!("cannot open the store at {}: {e}", db.display()))?;
-    if !with_demo {
-        return Ok(());
+    if with_demo && holds_nothing(&store)? {
+        import_demo(store)?;
     }
+    Ok(())
+}
+
+/// Whether the store holds no inspection at all (archived ones count).
+fn holds_nothing(store: &Store) -> Result<bool, String> {
     let all = ListFilter {
         include_archived: true,
         ..Default::default()
     };
-    let empty = store
+    Ok(store
         .list_inspections(&all)
         .map_err(|e| e.to_string())?
-        .is_empty();
-    if empty {
-        let demo = undercroft_core::interchange::from_json(DEMO_INSPECTION)
-            .map_err(|e| format!("the demo inspection does not read: {e}"))?;
-        let images = demo
-            .photos
-            .iter()
-            .filter_map(|p| {
-                DEMO_PHOTOS
-                    .iter()
-                    .find(|(file, _)| *file == p.file)
-                    .map(|(_, bytes)| (p.id.clone(), bytes.to_vec()))
-            })
-            .collect();
-        let (_, refused) = store
-            .import_inspection_with_images(&demo, &images)
-            .map_err(|e| format!("the demo inspection was not stored: {e}"))?;
-        if let Some((id, e)) = refused.first() {
-            return Err(format!("the demo photo {id} was not stored: {e}"));
-        }
+        .is_empty())
+}
+
+/// Whether the store at `db` (already prepared) is waiting for the demo.
+pub fn wants_demo(db: &Path) -> Result<bool, String> {
+    let store = Store::open(db).map_err(|e| e.to_string())?;
+    holds_nothing(&store)
+}
+
+/// Puts the demo inspection, with its photos, in the store.
+fn import_demo(mut store: Store) -> Result<(), String> {
+    let demo = undercroft_core::interchange::from_json(DEMO_INSPECTION)
+        .map_err(|e| format!("the demo inspection does not read: {e}"))?;
+    let images = demo
+        .photos
+        .iter()
+        .filter_map(|p| {
+            DEMO_PHOTOS
+                .iter()
+                .find(|(file, _)| *file == p.file)
+                .map(|(_, bytes)| (p.id.clone(), bytes.to_vec()))
+        })
+        .collect();
+    let (_, refused) = store
+        .import_inspection_with_images(&demo, &images)
+        .map_err(|e| format!("the demo inspection was not stored: {e}"))?;
+    if let Some((id, e)) = refused.first() {
+        return Err(format!("the demo photo {id} was not stored: {e}"));
     }
     Ok(())
+}
+
+/// Given to the root by a launcher that leaves the demo's import until the first screen is
+/// up (a first launch of the desktop app): it is imported on its own thread, through its own
+/// connection to the store, and the screens are refreshed when it is in.
+#[derive(Clone, Debug)]
+pub struct DemoLater(pub String);
+
+/// Starts the demo's import, if asked, and refreshes the screens when it is done.
+fn use_demo_later(state: Option<AppState>) -> Signal<Option<String>> {
+    let mut failed = use_signal(|| None::<String>);
+    let later = try_use_context::<DemoLater>();
+    use_hook(move || {
+        let (Some(DemoLater(db)), Some(state)) = (later, state) else {
+            return;
+        };
+        // A channel a plain thread can send on and the screen's task can wait on.
+        let (tx, mut rx) = futures_channel::mpsc::unbounded::<Result<(), String>>();
+        std::thread::spawn(move || {
+            let done = Store::open(Path::new(&db))
+                .map_err(|e| e.to_string())
+                .and_then(|store| match holds_nothing(&store)? {
+                    true => import_demo(store),
+                    false => Ok(()),
+                });
+            let _ = tx.unbounded_send(done);
+        });
+        spawn(async move {
+            if let Ok(done) = rx.recv().await {
+                if let Err(e) = done {
+                    eprintln!("undercroft-app: {e}");
+                    failed.set(Some(e));
+                }
+                let mut revision = state.revision;
+                revision += 1;
+            }
+        });
+    });
+    failed
 }
 
 /// The app over the store at `db`. A store that cannot be opened is said on screen.
@@ -88,10 +140,16 @@ pub fn Root(db: String) -> Element {
             .map(AppState::new)
             .map_err(|e| e.to_string())
     });
+    let failed = use_demo_later(state.as_ref().ok().cloned());
     match state {
         Ok(state) => {
             use_context_provider(|| state);
-            rsx! { App {} }
+            rsx! {
+                if let Some(e) = failed() {
+                    p { class: "field-error", role: "alert", "The demo inspection could not be added: {e}" }
+                }
+                App {}
+            }
         }
         Err(e) => rsx! {
             main {

@@ -3,11 +3,10 @@
 //! they are picked.
 
 use crate::components::{worst_status, AutosaveFields, PathChange, Photos, RowStatus, TopBar};
+use crate::edits::save_area_field;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{
-    area_with, field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS,
-};
+use undercroft_core::forms::{field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS};
 use undercroft_core::model::{Area, GirderKind, GirderLine, JoistRun, Member};
 use undercroft_core::store::new_id;
 
@@ -70,9 +69,18 @@ pub fn AreaView(id: String) -> Element {
             })
         })
     };
-    let save_own = use_callback(move |(name, text): PathChange| {
-        save_area(&|a: &Area| area_with(a, name, &text, units))
-    });
+    let save_own = {
+        let app = app.clone();
+        let id = id.clone();
+        use_callback(move |(name, text): PathChange| {
+            let mut saved = Ok(());
+            let _ = app.change(|s| {
+                saved = save_area_field(s, &id, name, &text);
+                Ok(())
+            });
+            saved
+        })
+    };
     let mut girder_label = use_signal(String::new);
     let add_girder = {
         let app = app.clone();

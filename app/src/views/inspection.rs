@@ -1,9 +1,10 @@
 //! One inspection: its areas, each with a count of what is over a limit; add an area.
 
 use crate::components::{worst_status, AutosaveFields, PathChange, RowStatus, TopBar};
+use crate::edits::save_header_field;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{field_text, inspection_with, FieldError, INSPECTION_FIELDS};
+use undercroft_core::forms::{field_text, INSPECTION_FIELDS};
 use undercroft_core::model::{Area, AreaKind};
 use undercroft_core::store::new_id;
 use undercroft_core::Status;
@@ -27,18 +28,12 @@ pub fn InspectionView(id: String) -> Element {
         let app = app.clone();
         let id = id.clone();
         use_callback(move |(name, text): PathChange| {
-            let not_saved = |message: String| FieldError {
-                field: "save",
-                message,
-            };
-            // Read fresh, so quick changes build on each other.
-            let current = app
-                .store
-                .borrow()
-                .load_inspection(&id)
-                .map_err(|e| not_saved(e.to_string()))?;
-            let next = inspection_with(&current, name, &text)?;
-            app.change(|s| s.update_header(&next)).map_err(not_saved)
+            let mut saved = Ok(());
+            let _ = app.change(|s| {
+                saved = save_header_field(s, &id, name, &text);
+                Ok(())
+            });
+            saved
         })
     };
     let over_in = |area_id: &str| {
