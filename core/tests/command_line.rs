@@ -565,6 +565,8 @@ fn report_command_writes_a_pdf_and_records_the_delivery() {
         "0193a1c2-7d00-7000-8000-00000000d001",
         "-o",
         stored.to_str().unwrap(),
+        "--to",
+        "Zoë Ångström-Nguyễn",
     ]);
     assert!(o.status.success(), "{}", stderr(&o));
     let store = undercroft_core::store::Store::open(std::path::Path::new(&db)).unwrap();
@@ -572,6 +574,11 @@ fn report_command_writes_a_pdf_and_records_the_delivery() {
         .reports("0193a1c2-7d00-7000-8000-00000000d001")
         .unwrap();
     assert_eq!(delivered.len(), 1);
+    assert_eq!(delivered[0].recipient, "Zoë Ångström-Nguyễn");
+    // A recipient is kept with a delivery of the store: with a file there is none to keep it.
+    let o = undercroft(&["report", &demo(), "-o", pdf.to_str().unwrap(), "--to", "x"]);
+    assert!(!o.status.success());
+    assert!(stderr(&o).contains("--inspection"), "{}", stderr(&o));
     assert_eq!(
         delivered[0].bytes,
         std::fs::metadata(&stored).unwrap().len()

@@ -31,12 +31,16 @@ pub struct ReportArgs {
     /// engineer reader; left out of the client's report by default.
     #[arg(long)]
     repair_options: bool,
-    /// Who the report goes to (a name or an address), kept with the delivery record.
-    #[arg(long, default_value = "")]
-    to: String,
+    /// Who the report goes to (a name or an address), kept with the delivery record of an
+    /// inspection in the store.
+    #[arg(long)]
+    to: Option<String>,
 }
 
 pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()> {
+    if args.to.is_some() && args.inspection.is_none() {
+        bail!("--to keeps who the report went to with its delivery in the store: use it with --inspection");
+    }
     let Some(paper) = Paper::parse(&args.paper) else {
         bail!("--paper {:?}: expected letter or a4", args.paper)
     };
@@ -107,7 +111,7 @@ pub fn run(args: &ReportArgs, db: Option<&std::path::Path>) -> anyhow::Result<()
             name,
             &bytes,
             &serde_json::to_string(&evaluation.findings)?,
-            &args.to,
+            args.to.as_deref().unwrap_or_default(),
         )?;
     }
     println!("wrote {} ({} bytes)", args.output.display(), bytes.len());
