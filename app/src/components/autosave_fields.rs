@@ -15,6 +15,9 @@ pub fn AutosaveFields(
     initial: Vec<String>,
     /// Saves one change: the field's error (or the store's, under "save") when it cannot.
     save: Callback<PathChange, Result<(), FieldError>>,
+    /// Metric inspections get the millimetre keypad.
+    #[props(default)]
+    metric: bool,
 ) -> Element {
     let mut texts = use_signal(|| initial);
     let mut errors = use_signal(Vec::<FieldError>::new);
@@ -32,7 +35,7 @@ pub fn AutosaveFields(
         errors.set(kept);
     };
     rsx! {
-        PathFields { prefix, fields, values: texts(), errors: errors(), on_change: change }
+        PathFields { prefix, fields, values: texts(), errors: errors(), metric, on_change: change }
         for e in errors().iter().filter(|e| e.field == "save") {
             p { class: "field-error", role: "alert", "Not saved: {e.message}" }
         }

@@ -9,6 +9,7 @@ use dioxus::prelude::*;
 use undercroft_core::forms::{field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS};
 use undercroft_core::model::{Area, GirderKind, GirderLine, JoistRun, Member};
 use undercroft_core::store::new_id;
+use undercroft_core::units::UnitSystem;
 
 #[component]
 pub fn AreaView(id: String) -> Element {
@@ -202,7 +203,7 @@ pub fn AreaView(id: String) -> Element {
             }
             button { id: "add-run", onclick: add, "Add run" }
             h2 { "The space under the floor" }
-            AutosaveFields { prefix: "site", fields: SITE_FIELDS, initial: site_texts, save: save_site }
+            AutosaveFields { prefix: "site", fields: SITE_FIELDS, initial: site_texts, save: save_site, metric: units == UnitSystem::Metric }
             details { id: "about-area",
                 summary { "About this area: name, kind, loads, notes" }
                 AutosaveFields { prefix: "area", fields: AREA_FIELDS, initial: own_texts, save: save_own }

@@ -4,7 +4,7 @@
 
 use crate::components::{
     worst_status, GirderSvg, PathChange, PathFields, Photos, RemoveButton, RowStatus, StatusBadge,
-    TopBar,
+    TapeInput, TopBar,
 };
 use crate::{use_app, Route};
 use dioxus::prelude::*;
@@ -14,6 +14,7 @@ use undercroft_core::forms::{
 use undercroft_core::model::Post;
 use undercroft_core::report::girder_view_of;
 use undercroft_core::store::new_id;
+use undercroft_core::units::UnitSystem;
 use undercroft_core::units::{bare_number_hint, parse_typed_length};
 
 #[component]
@@ -148,13 +149,13 @@ pub fn GirderScreen(id: String) -> Element {
                 }
             }
             label { r#for: "post-at", "A post at this distance from end A" }
-            input { id: "post-at", inputmode: "text", placeholder: "{bare_number_hint(units)}", value: "{position}", oninput: move |e| position.set(e.value()) }
+            TapeInput { id: "post-at", value: position(), placeholder: bare_number_hint(units), metric: units == UnitSystem::Metric, on_input: move |t| position.set(t) }
             if let Some(e) = post_error() {
                 p { class: "field-error", role: "alert", "{e}" }
             }
             button { id: "add-post", onclick: add_post, "Add post" }
             h2 { "The girder" }
-            PathFields { prefix: "girder", fields: GIRDER_FIELDS, values: texts(), errors: errors(), on_change: save }
+            PathFields { prefix: "girder", fields: GIRDER_FIELDS, values: texts(), errors: errors(), metric: units == UnitSystem::Metric, on_change: save }
             for e in errors().iter().filter(|e| e.field == "save") {
                 p { class: "field-error", "Not saved: {e.message}" }
             }

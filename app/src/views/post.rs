@@ -5,6 +5,7 @@ use crate::components::{PathChange, PathFields, Photos, RemoveButton, StatusBadg
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::{field_text, post_with, FieldError, POST_FIELDS};
+use undercroft_core::units::UnitSystem;
 
 #[component]
 pub fn PostScreen(id: String) -> Element {
@@ -87,7 +88,7 @@ pub fn PostScreen(id: String) -> Element {
                 }
             }
             h2 { "The post" }
-            PathFields { prefix: "post", fields: POST_FIELDS, values: texts(), errors: errors(), on_change: save }
+            PathFields { prefix: "post", fields: POST_FIELDS, values: texts(), errors: errors(), metric: units == UnitSystem::Metric, on_change: save }
             for e in errors().iter().filter(|e| e.field == "save") {
                 p { class: "field-error", "Not saved: {e.message}" }
             }
