@@ -124,7 +124,11 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
                         input { id: "{spec.name}", r#type: "checkbox", checked: f.value(spec.name) == "true",
                             onchange: move |e| save.call((spec.name, e.checked().to_string())) }
                     },
-                    FieldType::Readings | FieldType::Text => rsx! {
+                    FieldType::Readings => rsx! {
+                        textarea { id: "{spec.name}", value: "{f.value(spec.name)}", placeholder: "7' 7\", 5/8\"  (a number alone is inches)",
+                            oninput: move |e| save.call((spec.name, e.value())) }
+                    },
+                    FieldType::Text => rsx! {
                         textarea { id: "{spec.name}", value: "{f.value(spec.name)}", oninput: move |e| save.call((spec.name, e.value())) }
                     },
                     FieldType::Percent | FieldType::Count => rsx! {
