@@ -319,3 +319,40 @@ fn report_screen_says_what_to_look_at_before_handing_over() {
     assert!(!check.contains("No licence number"));
     assert!(html.contains("repair-options"));
 }
+
+#[test]
+fn the_joist_walk_shows_the_place_and_carries_the_previous_joist_forward() {
+    let html = render("/walk/run-kitchen/16");
+    assert!(html.contains("Joist at 1&#39; 4&#34;"), "{html}");
+    assert!(html.contains("joist 1, 16&#34; on centre"), "{html}");
+    assert!(html.contains("Same as the run"), "{html}");
+    assert!(html.contains("Next joist") && html.contains("id=\"observe-notch\""));
+
+    let mut demo = demo();
+    let run = demo.areas[0]
+        .runs
+        .iter_mut()
+        .find(|r| r.id == "run-kitchen")
+        .unwrap();
+    run.joists.push(undercroft_core::model::Joist {
+        id: "walked".into(),
+        label: "Joist at 2' 8\"".into(),
+        at: Some(undercroft_core::units::Length::inches(32.0)),
+        framing: undercroft_core::model::Framing {
+            size: "2x12".parse().ok(),
+            ..Default::default()
+        },
+        observations: vec![],
+    });
+    let here = render_with("/walk/run-kitchen/32", &demo);
+    assert!(here.contains("Differs from the run: 2x12"), "{here}");
+    let next = render_with("/walk/run-kitchen/48", &demo);
+    assert!(next.contains("Same as the previous joist"), "{next}");
+    let run_screen = render_with("/run/run-kitchen", &demo);
+    assert!(
+        run_screen.contains("Joist at 2&#39; 8&#34;") && run_screen.contains("2x12"),
+        "the walked joist is listed with what differs"
+    );
+    let nowhere = render("/walk/run-kitchen/not-a-place");
+    assert!(nowhere.contains("This is not a place along a run."));
+}

@@ -42,3 +42,30 @@ pub fn RowStatus(status: Option<Status>) -> Element {
     };
     rsx! { span { class: "row-status status-{class}", "{words}" } }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn a_row_takes_the_worst_status_of_what_it_stands_for() {
+        let demo =
+            undercroft_core::interchange::from_json(crate::startup::DEMO_INSPECTION).unwrap();
+        let evaluation = undercroft_core::evaluate(&demo);
+        // The kitchen run is over its allowable span (the demo's 15' 2" against 14' 1").
+        assert_eq!(
+            worst_status(&evaluation, &["run-kitchen"]),
+            Some(Status::OverLimit)
+        );
+        assert_eq!(worst_status(&evaluation, &["nothing-here"]), None);
+        let statuses: Vec<Status> = evaluation.findings.iter().map(|f| f.status).collect();
+        let worst = statuses.iter().copied().max_by_key(|s| weight(*s));
+        assert_eq!(
+            worst_status(&evaluation, &[demo.id.as_str(), "area-crawl", "area-base"]),
+            worst
+        );
+        assert!(weight(Status::OverLimit) > weight(Status::ToEvaluate));
+        assert!(weight(Status::ToEvaluate) > weight(Status::NearLimit));
+        assert!(weight(Status::NotChecked) > weight(Status::Within));
+    }
+}
