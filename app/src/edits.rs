@@ -150,18 +150,17 @@ mod tests {
         (store, dir)
     }
 
+    /// The demo kitchen run's framing as stored.
+    fn kitchen_framing(store: &Store, id: &str) -> Framing {
+        let inspection = store.load_inspection(id).unwrap();
+        inspection.run("run-kitchen").unwrap().1.framing.clone()
+    }
+
     #[test]
     fn a_field_that_reads_is_saved_and_one_that_does_not_keeps_the_stored_value() {
         let (mut store, dir) = demo_store("run");
         let id = "0193a1c2-7d00-7000-8000-00000000d001";
-        let stored = store
-            .load_inspection(id)
-            .unwrap()
-            .run("run-kitchen")
-            .unwrap()
-            .1
-            .framing
-            .clone();
+        let stored = kitchen_framing(&store, id);
         let mut form = FramingForm::from_framing(&stored, UnitSystem::Imperial);
         let owner = FramingOwner::Run {
             id: "run-kitchen",
@@ -243,14 +242,7 @@ mod tests {
         let (mut store, dir) = demo_store("question");
         let id = "0193a1c2-7d00-7000-8000-00000000d001";
         let span_now = || store_span(&dir, id);
-        let stored = store
-            .load_inspection(id)
-            .unwrap()
-            .run("run-kitchen")
-            .unwrap()
-            .1
-            .framing
-            .clone();
+        let stored = kitchen_framing(&store, id);
         let mut form = FramingForm::from_framing(&stored, UnitSystem::Imperial);
         let owner = FramingOwner::Run {
             id: "run-kitchen",

@@ -76,6 +76,20 @@ impl AppState {
             })
     }
 
+    /// A field change through one of `edits`' functions, which says the field's problem (or
+    /// the store's, under "save") itself; the screens are refreshed as for any change.
+    pub fn change_field(
+        &self,
+        edit: impl FnOnce(&mut Store) -> Result<(), FieldError>,
+    ) -> Result<(), FieldError> {
+        let mut outcome = Ok(());
+        let _ = self.change(|s| {
+            outcome = edit(s);
+            Ok(())
+        });
+        outcome
+    }
+
     /// Runs a change against the store (saved when it returns) and refreshes the screens.
     pub fn change<T>(
         &self,

@@ -74,12 +74,7 @@ pub fn AreaView(id: String) -> Element {
         let app = app.clone();
         let id = id.clone();
         use_callback(move |(name, text): PathChange| {
-            let mut saved = Ok(());
-            let _ = app.change(|s| {
-                saved = save_area_field(s, &id, name, &text);
-                Ok(())
-            });
-            saved
+            app.change_field(|s| save_area_field(s, &id, name, &text))
         })
     };
     let mut girder_label = use_signal(String::new);

@@ -28,12 +28,7 @@ pub fn InspectionView(id: String) -> Element {
         let app = app.clone();
         let id = id.clone();
         use_callback(move |(name, text): PathChange| {
-            let mut saved = Ok(());
-            let _ = app.change(|s| {
-                saved = save_header_field(s, &id, name, &text);
-                Ok(())
-            });
-            saved
+            app.change_field(|s| save_header_field(s, &id, name, &text))
         })
     };
     let over_in = |area_id: &str| {
