@@ -76,6 +76,12 @@ pub fn from_json(text: &str) -> Result<Inspection> {
 }
 
 /// Writes the inspection as pretty JSON.
+/// The demo inspection shipped in `demo-data/`, for the crate's own tests.
+#[cfg(test)]
+pub(crate) fn demo() -> Inspection {
+    from_json(include_str!("../../demo-data/demo-inspection.json")).expect("the demo reads")
+}
+
 pub fn to_json(inspection: &Inspection) -> String {
     serde_json::to_string_pretty(inspection).expect("the model always serializes")
 }

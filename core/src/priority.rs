@@ -143,8 +143,7 @@ mod tests {
 
     #[test]
     fn demo_findings_get_the_expected_defaults() {
-        let i = crate::interchange::from_json(include_str!("../../demo-data/demo-inspection.json"))
-            .unwrap();
+        let i = crate::interchange::demo();
         let e = crate::evaluate(&i);
         let of = |rule: &str, status: Status| {
             e.findings

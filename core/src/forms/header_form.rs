@@ -153,8 +153,7 @@ mod tests {
     use crate::model::RoomUse;
 
     fn demo() -> Inspection {
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap()
+        crate::interchange::demo()
     }
 
     #[test]

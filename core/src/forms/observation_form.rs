@@ -519,9 +519,7 @@ mod tests {
 
     #[test]
     fn every_kind_round_trips_through_its_form() {
-        let demo =
-            crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-                .unwrap();
+        let demo = crate::interchange::demo();
         let observations = demo.observations().map(|(_, o)| o);
         let mut kinds = std::collections::HashSet::new();
         for o in observations {

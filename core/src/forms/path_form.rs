@@ -553,9 +553,7 @@ mod tests {
     use crate::model::{BearingSupport, PostCondition};
 
     fn demo_line() -> GirderLine {
-        let demo =
-            crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-                .unwrap();
+        let demo = crate::interchange::demo();
         demo.areas[0].girders[0].clone()
     }
 

@@ -84,9 +84,7 @@ mod tests {
     // is over the limit.
     #[test]
     fn a_typed_notch_is_judged_before_it_is_saved() {
-        let demo =
-            crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-                .unwrap();
+        let demo = crate::interchange::demo();
         let mut form = ObservationForm::new("notch");
         for (k, v) in [
             ("edge", "bottom"),

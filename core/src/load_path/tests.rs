@@ -7,7 +7,7 @@ use crate::model::{GirderLine, Post};
 use crate::units::Length;
 
 fn demo() -> Inspection {
-    crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json")).unwrap()
+    crate::interchange::demo()
 }
 
 fn common(i: &Inspection) -> Common {

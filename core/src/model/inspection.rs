@@ -309,8 +309,7 @@ mod tests {
     use crate::units::Length;
 
     fn demo() -> super::Inspection {
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap()
+        crate::interchange::demo()
     }
 
     #[test]

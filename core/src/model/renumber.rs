@@ -101,9 +101,7 @@ mod tests {
 
     #[test]
     fn every_id_is_new_and_references_follow() {
-        let demo: Inspection =
-            crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-                .unwrap();
+        let demo: Inspection = crate::interchange::demo();
         let mut n = 0;
         let (copy, map) = renumbered(&demo, || {
             n += 1;

@@ -185,8 +185,7 @@ mod tests {
     use crate::units::Length;
 
     fn inspection() -> Inspection {
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap()
+        crate::interchange::demo()
     }
 
     #[test]

@@ -81,8 +81,7 @@ mod tests {
     use super::*;
 
     fn demo() -> Inspection {
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap()
+        crate::interchange::demo()
     }
 
     #[test]

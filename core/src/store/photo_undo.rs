@@ -108,9 +108,7 @@ mod tests {
         ));
         std::fs::create_dir_all(&dir).unwrap();
         let mut store = Store::open(&dir.join("store.sqlite")).unwrap();
-        let demo =
-            crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-                .unwrap();
+        let demo = crate::interchange::demo();
         store.import_inspection(&demo).unwrap();
         let owner = "run-kitchen".to_string();
         let ids = (0..3)

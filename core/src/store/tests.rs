@@ -30,9 +30,7 @@ impl Drop for Temp {
 
 /// The demo inspection without its photo references: these tests add their own photos.
 fn demo() -> Inspection {
-    let mut demo: Inspection =
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap();
+    let mut demo: Inspection = crate::interchange::demo();
     demo.photos.clear();
     demo
 }
@@ -719,9 +717,7 @@ fn girder_lines_and_posts_are_edited_in_place() {
     use crate::units::Length;
     let t = Temp::new("girders");
     let mut store = Store::open(&t.db()).unwrap();
-    let demo =
-        crate::interchange::from_json(include_str!("../../../demo-data/demo-inspection.json"))
-            .unwrap();
+    let demo = crate::interchange::demo();
     store.import_inspection(&demo).unwrap();
     let area = demo.areas[0].id.clone();
     let mut line = GirderLine::new(new_id(), "Girder B");
