@@ -17,6 +17,7 @@ pub mod report;
 pub mod rules;
 mod serde_text;
 pub mod store;
+pub mod sync;
 pub mod units;
 pub mod validate;
 

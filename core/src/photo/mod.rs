@@ -111,6 +111,29 @@ pub fn process(bytes: &[u8]) -> Result<ProcessedPhoto, PhotoError> {
     })
 }
 
+/// Encodes packed RGB pixels (3 bytes a pixel, rows packed) as a JPEG with no metadata: for
+/// tools that make images, such as the office server's load test.
+pub fn encode_rgb(
+    width: u32,
+    height: u32,
+    pixels: Vec<u8>,
+    quality: i32,
+) -> Result<Vec<u8>, PhotoError> {
+    if width == 0 || height == 0 || pixels.len() as u64 != 3 * width as u64 * height as u64 {
+        return Err(PhotoError::Damaged(
+            "the pixels do not fill the size given".into(),
+        ));
+    }
+    pixels::encode(
+        &pixels::Rgb {
+            width,
+            height,
+            pixels,
+        },
+        quality,
+    )
+}
+
 /// Width and height of a JPEG without decoding it (for embedding a stored image).
 pub fn jpeg_size(bytes: &[u8]) -> Result<(u32, u32), PhotoError> {
     pixels::jpeg_header(bytes).map(|h| (h.0, h.1))

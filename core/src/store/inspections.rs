@@ -43,16 +43,28 @@ pub struct ListFilter {
 
 impl Store {
     /// Starts an inspection and returns its id.
+    /// What the inspection leaves empty is filled from the firm's settings, when the office
+    /// has sent them: company, licence, the county's edition and amendments, default loads.
     pub fn create_inspection(&mut self, new: &NewInspection) -> Result<String> {
+        let mut new = new.clone();
+        let firm = self.firm_settings()?;
+        let amendments = firm.as_ref().and_then(|f| f.fill(&mut new));
+        let new = &new;
         if new.date.trim().is_empty() {
             return Err(StoreError::Invalid("the inspection needs a date".into()));
         }
         crate::model::check_date(new.date.trim()).map_err(StoreError::Invalid)?;
         let id = new_id();
         let now = now_utc();
+        let firm_loads = firm.filter(|_| new.room_use_above.is_none());
         let loads = LoadSettings {
             room_use_above: new.room_use_above,
             heavy_finish: Some(new.heavy_finish),
+            live_psf: firm_loads.as_ref().and_then(|f| f.live_psf),
+            dead_psf: firm_loads
+                .as_ref()
+                .and_then(|f| f.dead_psf)
+                .filter(|_| !new.heavy_finish),
             ..Default::default()
         };
         let edition = if new.code_edition.trim().is_empty() {
@@ -62,8 +74,8 @@ impl Store {
         };
         self.conn.execute(
             "INSERT INTO inspections (id, format_version, address, client_name, visit_date, code_edition,
-                inspector_name, inspector_company, inspector_license, loads, created_at, updated_at, search_key, units)
-             VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?11, ?12, ?13)",
+                inspector_name, inspector_company, inspector_license, loads, created_at, updated_at, search_key, units, local_amendments)
+             VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?11, ?12, ?13, ?14)",
             params![
                 id,
                 FORMAT_VERSION,
@@ -78,6 +90,7 @@ impl Store {
                 now,
                 search_key(&new.address, &new.client_name),
                 super::save::text_of(&new.units)?,
+                amendments.unwrap_or_default(),
             ],
         )?;
         Ok(id)

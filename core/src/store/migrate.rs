@@ -39,6 +39,10 @@ const MIGRATIONS: &[Migration] = &[
         sql: include_str!("../../../migrations/0007_recipient_and_marks.sql"),
         after: None,
     },
+    Migration {
+        sql: include_str!("../../../migrations/0008_office_sync.sql"),
+        after: None,
+    },
 ];
 
 /// The `application_id` a store of ours carries from version 3 ("UNDC").

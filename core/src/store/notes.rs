@@ -98,6 +98,13 @@ impl Store {
             bytes: pdf.len() as u64,
             recipient: recipient.trim().into(),
         };
+        // A copy named by its hash, so the delivered PDF can be sent to the office exactly as
+        // delivered even after a later report takes its file name.
+        let kept = self.delivered_pdf_path(&report.sha256);
+        if let Some(folder) = kept.parent() {
+            std::fs::create_dir_all(folder)?;
+        }
+        super::write_durably(&kept, pdf)?;
         self.edit(inspection_id, |tx| {
             tx.execute(
                 "INSERT INTO reports (id, inspection_id, delivered_at, file_name, sha256, bytes, findings, recipient) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)",

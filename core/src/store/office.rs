@@ -1,0 +1,253 @@
+//! The store's side of the office sync: the device's id, the office's address and token, the
+//! firm's settings as last taken, what was pushed of each inspection, and a finished
+//! inspection's manifest with where each of its files is.
+
+use super::{Result, Store, StoreError};
+use crate::sync::{FirmSettings, ImageRef, Manifest, ReportRef};
+use rusqlite::{params, OptionalExtension};
+use serde::{Deserialize, Serialize};
+use std::collections::HashMap;
+use std::path::PathBuf;
+
+/// Where the office is and the token it issued this inspector.
+#[derive(Debug, Clone, PartialEq, Default, Serialize, Deserialize)]
+#[serde(default)]
+pub struct OfficeLink {
+    /// e.g. `https://office.example.com`
+    pub url: String,
+    pub token: String,
+}
+
+/// What the office acknowledged for one inspection.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PushedRevision {
+    pub content_sha256: String,
+    pub revision: i64,
+    pub pushed_at: String,
+}
+
+/// A manifest and the files it names, by SHA-256.
+#[derive(Debug, Clone)]
+pub struct OutgoingRevision {
+    pub manifest: Manifest,
+    pub files: HashMap<String, PathBuf>,
+    /// Reports whose PDF the device no longer holds (recorded, not sent).
+    pub reports_without_pdf: usize,
+    /// Photos with no image on this device (references only).
+    pub photos_without_image: usize,
+}
+
+impl Store {
+    fn setting<T: for<'de> Deserialize<'de>>(&self, key: &str) -> Result<Option<T>> {
+        let text: Option<String> = self
+            .conn
+            .query_row("SELECT value FROM settings WHERE key = ?1", [key], |r| {
+                r.get(0)
+            })
+            .optional()?;
+        Ok(text.and_then(|t| serde_json::from_str(&t).ok()))
+    }
+
+    fn put_setting<T: Serialize>(&mut self, key: &str, value: &T) -> Result<()> {
+        self.conn.execute(
+            "INSERT INTO settings (key, value) VALUES (?1, ?2) ON CONFLICT (key) DO UPDATE SET value = ?2",
+            (key, serde_json::to_string(value)?),
+        )?;
+        Ok(())
+    }
+
+    /// This device's id, made once and kept.
+    pub fn device_id(&mut self) -> Result<String> {
+        if let Some(id) = self.setting::<String>("device")? {
+            return Ok(id);
+        }
+        let id = super::new_id();
+        self.put_setting("device", &id)?;
+        Ok(id)
+    }
+
+    pub fn office_link(&self) -> Result<OfficeLink> {
+        Ok(self.setting("office")?.unwrap_or_default())
+    }
+
+    pub fn save_office_link(&mut self, link: &OfficeLink) -> Result<()> {
+        self.put_setting("office", link)
+    }
+
+    /// The firm's settings as last taken from the office, if ever.
+    pub fn firm_settings(&self) -> Result<Option<FirmSettings>> {
+        self.setting("firm")
+    }
+
+    /// Keeps the firm's settings and puts its company, licence and edition into the device's
+    /// own settings.
+    pub fn save_firm_settings(&mut self, firm: &FirmSettings) -> Result<()> {
+        let mut settings = self.settings()?;
+        firm.apply_to(&mut settings);
+        let tx = self.conn.transaction()?;
+        tx.execute(
+            "INSERT INTO settings (key, value) VALUES ('firm', ?1) ON CONFLICT (key) DO UPDATE SET value = ?1",
+            [serde_json::to_string(firm)?],
+        )?;
+        tx.execute(
+            "INSERT INTO settings (key, value) VALUES ('app', ?1) ON CONFLICT (key) DO UPDATE SET value = ?1",
+            [serde_json::to_string(&settings)?],
+        )?;
+        tx.commit()?;
+        Ok(())
+    }
+
+    /// Inspections with at least one delivered report: the ones a sync sends.
+    pub fn finished_inspections(&self) -> Result<Vec<String>> {
+        let mut stmt = self.conn.prepare(
+            "SELECT i.id FROM inspections i WHERE EXISTS (SELECT 1 FROM reports r WHERE r.inspection_id = i.id) ORDER BY i.created_at, i.id",
+        )?;
+        let ids = stmt
+            .query_map([], |r| r.get(0))?
+            .collect::<rusqlite::Result<_>>()?;
+        Ok(ids)
+    }
+
+    pub fn pushed_revision(&self, inspection_id: &str) -> Result<Option<PushedRevision>> {
+        Ok(self
+            .conn
+            .query_row(
+                "SELECT content_sha256, revision, pushed_at FROM office_pushes WHERE inspection_id = ?1",
+                [inspection_id],
+                |r| {
+                    Ok(PushedRevision {
+                        content_sha256: r.get(0)?,
+                        revision: r.get(1)?,
+                        pushed_at: r.get(2)?,
+                    })
+                },
+            )
+            .optional()?)
+    }
+
+    pub fn record_push(
+        &mut self,
+        inspection_id: &str,
+        content_sha256: &str,
+        revision: i64,
+    ) -> Result<()> {
+        self.conn.execute(
+            "INSERT INTO office_pushes (inspection_id, content_sha256, revision, pushed_at) VALUES (?1, ?2, ?3, ?4)
+             ON CONFLICT (inspection_id) DO UPDATE SET content_sha256 = ?2, revision = ?3, pushed_at = ?4",
+            params![inspection_id, content_sha256, revision, super::now_utc()],
+        )?;
+        Ok(())
+    }
+
+    /// Where the copy of a delivered PDF is kept, by its SHA-256.
+    pub fn delivered_pdf_path(&self, sha256: &str) -> PathBuf {
+        self.report_dir()
+            .join("delivered")
+            .join(format!("{sha256}.pdf"))
+    }
+
+    /// The inspection as the office will keep it, and where each file it names is. A file
+    /// is named by the SHA-256 of its bytes, read now (a file changed on disk is sent as it
+    /// is, under its own hash).
+    pub fn outgoing_revision(&self, inspection_id: &str) -> Result<OutgoingRevision> {
+        let inspection = self.load_inspection(inspection_id)?;
+        let mut files = HashMap::new();
+        let mut images = Vec::new();
+        let mut photos_without_image = 0;
+        for photo in self.photos_of_inspection(inspection_id)? {
+            let Some(report) = photo.report_path.as_ref().filter(|p| p.exists()) else {
+                photos_without_image += 1;
+                continue;
+            };
+            let (report_sha256, report_bytes) = hash_file(report)?;
+            files.insert(report_sha256.clone(), report.clone());
+            let original = match photo.original_path.as_ref().filter(|p| p.exists()) {
+                Some(path) => {
+                    let (sha, bytes) = hash_file(path)?;
+                    files.insert(sha.clone(), path.clone());
+                    Some((sha, bytes))
+                }
+                None => None,
+            };
+            images.push(ImageRef {
+                photo_id: photo.id,
+                report_sha256,
+                report_bytes,
+                original_sha256: original.as_ref().map(|o| o.0.clone()),
+                original_bytes: original.map(|o| o.1),
+            });
+        }
+        let mut reports = Vec::new();
+        let mut reports_without_pdf = 0;
+        for delivered in self.reports(inspection_id)? {
+            let kept = [
+                self.delivered_pdf_path(&delivered.sha256),
+                self.report_dir().join(&delivered.file_name),
+            ]
+            .into_iter()
+            .find(|p| hash_file(p).is_ok_and(|(sha, _)| sha == delivered.sha256));
+            if let Some(path) = &kept {
+                files.insert(delivered.sha256.clone(), path.clone());
+            } else {
+                reports_without_pdf += 1;
+            }
+            reports.push(ReportRef {
+                id: delivered.id,
+                delivered_at: delivered.delivered_at,
+                file_name: delivered.file_name,
+                recipient: delivered.recipient,
+                sha256: delivered.sha256,
+                bytes: delivered.bytes,
+                pdf_sent: kept.is_some(),
+            });
+        }
+        // Oldest first, so the manifest does not change when nothing did.
+        reports.reverse();
+        let manifest = Manifest {
+            inspection: crate::interchange::to_json(&inspection),
+            notes: self.finding_notes(inspection_id)?,
+            images,
+            reports,
+        };
+        if manifest.check().is_err() {
+            return Err(StoreError::Invalid(format!(
+                "inspection {inspection_id} cannot be sent as it is: {}",
+                manifest
+                    .check()
+                    .err()
+                    .map(|e| e.to_string())
+                    .unwrap_or_default()
+            )));
+        }
+        Ok(OutgoingRevision {
+            manifest,
+            files,
+            reports_without_pdf,
+            photos_without_image,
+        })
+    }
+}
+
+/// SHA-256 and size of a file, read in pieces.
+fn hash_file(path: &std::path::Path) -> Result<(String, u64)> {
+    use sha2::{Digest, Sha256};
+    use std::io::Read;
+    let mut file = std::fs::File::open(path)?;
+    let mut hasher = Sha256::new();
+    let mut buffer = vec![0u8; 64 * 1024];
+    let mut total = 0u64;
+    loop {
+        let n = file.read(&mut buffer)?;
+        if n == 0 {
+            break;
+        }
+        hasher.update(&buffer[..n]);
+        total += n as u64;
+    }
+    let hex = hasher
+        .finalize()
+        .iter()
+        .map(|b| format!("{b:02x}"))
+        .collect();
+    Ok((hex, total))
+}

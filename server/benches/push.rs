@@ -1,0 +1,2 @@
+//! Benchmark placeholder, written below.
+fn main() {}
