@@ -136,7 +136,7 @@ impl Office {
              FROM inspections i
              JOIN revisions r ON r.id = i.latest_revision
              JOIN people o ON o.id = i.owner_id
-             WHERE ($1 = 0 OR i.owner_id = $1)
+             WHERE ($1::bigint = 0 OR i.owner_id = $1)
                AND ($2 = '%%' OR r.address ILIKE $2)
                AND ($3 = '%%' OR r.client ILIKE $3)
                AND ($4 = '%%' OR r.inspector_name ILIKE $4 OR o.name ILIKE $4)

@@ -48,14 +48,14 @@ impl ApiError {
 
 impl From<tokio_postgres::Error> for ApiError {
     fn from(e: tokio_postgres::Error) -> Self {
-        // A closed connection or a database shutting down is the database's absence, not a
-        // fault of the request: the device tries again.
-        if e.is_closed() || e.as_db_error().is_none() {
-            ApiError::Unavailable(e.to_string())
-        } else if e
-            .as_db_error()
-            .is_some_and(|d| d.code().code().starts_with("57") || d.code().code().starts_with("08"))
-        {
+        // A closed connection, a broken socket or a database shutting down is the database's
+        // absence, not a fault of the request: the device tries again.
+        let io = std::error::Error::source(&e).is_some_and(|s| s.is::<std::io::Error>());
+        let shutting_down = e.as_db_error().is_some_and(|d| {
+            let code = d.code().code();
+            code.starts_with("57") || code.starts_with("08")
+        });
+        if e.is_closed() || io || shutting_down {
             ApiError::Unavailable(e.to_string())
         } else {
             ApiError::Internal(e.to_string())

@@ -109,6 +109,8 @@ pub enum PushOutcome {
 pub enum ManifestError {
     #[error("inspection: {0}")]
     Inspection(String),
+    #[error("{0} is named both as a photo and as a report PDF")]
+    TwoKinds(String),
     #[error("{0} is not a SHA-256 (64 lower-case hex digits)")]
     NotAHash(String),
     #[error("photo {0} is not a photo of this inspection")]
@@ -191,8 +193,18 @@ impl Manifest {
                 check_size("an original photo", bytes, super::blob::MAX_IMAGE_BYTES)?;
             }
         }
+        let image_hashes: HashSet<&str> = self
+            .images
+            .iter()
+            .flat_map(|i| {
+                std::iter::once(i.report_sha256.as_str()).chain(i.original_sha256.as_deref())
+            })
+            .collect();
         let mut reports = HashSet::new();
         for report in &self.reports {
+            if report.pdf_sent && image_hashes.contains(report.sha256.as_str()) {
+                return Err(ManifestError::TwoKinds(report.sha256.clone()));
+            }
             if !reports.insert(report.id.as_str()) {
                 return Err(ManifestError::DuplicateReport(report.id.clone()));
             }
@@ -337,6 +349,10 @@ mod tests {
                 "UTC time",
             ),
             (|m| m.reports.push(m.reports[0].clone()), "listed twice"),
+            (
+                |m| m.reports[0].sha256 = m.images[0].report_sha256.clone(),
+                "both as a photo and as a report",
+            ),
             (
                 |m| m.reports[0].recipient = "x".repeat(10_000),
                 "longer than",
