@@ -7,6 +7,7 @@ mod report_cmd;
 mod rules_cmd;
 mod span_cmd;
 mod store_cmd;
+mod sync_cmd;
 
 use clap::{Parser, Subcommand};
 use std::process::ExitCode;
@@ -45,6 +46,9 @@ enum Command {
     Report(report_cmd::ReportArgs),
     /// The rules the engine applies, with their ids and citations.
     Rules,
+    /// Send finished inspections and their delivered reports to the firm's office server,
+    /// and take the firm's settings.
+    Sync(sync_cmd::SyncArgs),
 }
 
 fn main() -> ExitCode {
@@ -59,6 +63,7 @@ fn main() -> ExitCode {
         Command::Import(args) => store_cmd::import(&args, cli.db.as_deref()),
         Command::Export(args) => store_cmd::export(&args, cli.db.as_deref()),
         Command::AddPhoto(args) => store_cmd::add_photo(&args, cli.db.as_deref()),
+        Command::Sync(args) => sync_cmd::run(&args, cli.db.as_deref()),
     };
     match result {
         Ok(()) => ExitCode::SUCCESS,
