@@ -13,6 +13,7 @@ pub mod page;
 pub mod people;
 pub mod pg_cluster;
 pub mod push;
+pub mod synthetic;
 
 use auth::Caller;
 use axum::extract::{DefaultBodyLimit, FromRequestParts};

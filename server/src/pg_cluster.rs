@@ -10,7 +10,17 @@ use std::process::{Command, Stdio};
 /// A database for one test: its URL, and the cluster that holds it when the test started one.
 pub struct TestDatabase {
     pub url: String,
-    _cluster: Option<Cluster>,
+    /// The cluster this test started, when it has one of its own.
+    pub cluster: Option<Cluster>,
+}
+
+/// A database in a cluster of the test's own, for tests that stop and start it.
+pub fn own_database() -> TestDatabase {
+    let cluster = Cluster::start().expect("a throwaway PostgreSQL cluster starts");
+    TestDatabase {
+        url: cluster.url(),
+        cluster: Some(cluster),
+    }
 }
 
 /// A database of its own for one test: in the shared cluster when one is named, else in a
@@ -29,16 +39,9 @@ pub fn test_database(name: &str) -> TestDatabase {
         psql(&format!("DROP DATABASE IF EXISTS {db}"));
         psql(&format!("CREATE DATABASE {db}"));
         let url = replace_database(&admin, &db);
-        return TestDatabase {
-            url,
-            _cluster: None,
-        };
+        return TestDatabase { url, cluster: None };
     }
-    let cluster = Cluster::start().expect("a throwaway PostgreSQL cluster starts");
-    TestDatabase {
-        url: cluster.url(),
-        _cluster: Some(cluster),
-    }
+    own_database()
 }
 
 /// The URL with its database name replaced.

@@ -36,18 +36,36 @@ fn undercroft_sync_sends_the_store_and_keeps_the_office_for_next_time() {
         .output()
         .unwrap();
     let said = String::from_utf8_lossy(&first.stdout);
-    assert!(first.status.success(), "{said}{}", String::from_utf8_lossy(&first.stderr));
+    assert!(
+        first.status.success(),
+        "{said}{}",
+        String::from_utf8_lossy(&first.stderr)
+    );
     assert!(said.contains("1 sent"), "{said}");
     // The second run needs neither address nor token, and sends nothing.
-    let second = undercroft().arg("--db").arg(&db).arg("sync").env_remove("UNDERCROFT_TOKEN").output().unwrap();
+    let second = undercroft()
+        .arg("--db")
+        .arg(&db)
+        .arg("sync")
+        .env_remove("UNDERCROFT_TOKEN")
+        .output()
+        .unwrap();
     let said = String::from_utf8_lossy(&second.stdout);
     assert!(second.status.success(), "{said}");
     assert!(said.contains("0 sent; 1 already at the office"), "{said}");
     assert!(!said.contains(&token), "the token is never printed");
     // Revoked: refused in words, exit code 2, nothing lost on the device.
     let id = &token[4..20];
-    server.runtime.block_on(server.office.revoke_token(id)).unwrap();
-    let third = undercroft().arg("--db").arg(&db).arg("sync").output().unwrap();
+    server
+        .runtime
+        .block_on(server.office.revoke_token(id))
+        .unwrap();
+    let third = undercroft()
+        .arg("--db")
+        .arg(&db)
+        .arg("sync")
+        .output()
+        .unwrap();
     assert_eq!(third.status.code(), Some(2));
     let said = String::from_utf8_lossy(&third.stderr);
     assert!(said.contains("refused the token"), "{said}");
@@ -58,7 +76,13 @@ fn undercroft_sync_sends_the_store_and_keeps_the_office_for_next_time() {
 fn undercroft_sync_without_an_office_or_with_a_wrong_one_says_so() {
     let dir = temp_dir("cli-wrong");
     let db = dir.join("device.sqlite");
-    let none = undercroft().arg("--db").arg(&db).arg("sync").env_remove("UNDERCROFT_TOKEN").output().unwrap();
+    let none = undercroft()
+        .arg("--db")
+        .arg(&db)
+        .arg("sync")
+        .env_remove("UNDERCROFT_TOKEN")
+        .output()
+        .unwrap();
     assert_eq!(none.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&none.stderr).contains("no office address yet"));
     let ftp = undercroft()
@@ -74,6 +98,10 @@ fn undercroft_sync_without_an_office_or_with_a_wrong_one_says_so() {
         .args(["sync", "--office", "http://127.0.0.1:9", "--token", "uct_x"])
         .output()
         .unwrap();
-    assert!(String::from_utf8_lossy(&gone.stderr).contains("could not be reached"), "{}", String::from_utf8_lossy(&gone.stderr));
+    assert!(
+        String::from_utf8_lossy(&gone.stderr).contains("could not be reached"),
+        "{}",
+        String::from_utf8_lossy(&gone.stderr)
+    );
     std::fs::remove_dir_all(&dir).ok();
 }

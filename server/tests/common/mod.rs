@@ -8,6 +8,7 @@ use std::sync::Arc;
 use undercroft_core::store::Store;
 use undercroft_server::auth::Role;
 use undercroft_server::pg_cluster::{test_database, TestDatabase};
+pub use undercroft_server::synthetic::{photo, synthetic_push, tiny_pdf};
 use undercroft_server::Office;
 
 pub struct Running {
@@ -57,7 +58,32 @@ pub fn temp_dir(name: &str) -> PathBuf {
 
 /// The server on a loopback port with a database of its own.
 pub fn start(name: &str) -> Running {
-    let db = test_database(name);
+    start_on(test_database(name), name)
+}
+
+/// The office opened on a database (its schema made) without serving it: for tests that
+/// run the server as a child process and read the database beside it.
+pub fn open_only(db: TestDatabase, name: &str) -> Running {
+    let files = temp_dir(&format!("{name}-files"));
+    let runtime = tokio::runtime::Builder::new_multi_thread()
+        .worker_threads(2)
+        .enable_all()
+        .build()
+        .unwrap();
+    let office = runtime
+        .block_on(Office::open(&db.url, &files))
+        .expect("the office opens");
+    Running {
+        url: String::new(),
+        office,
+        files,
+        runtime,
+        db,
+    }
+}
+
+/// The server on a loopback port, on the given database.
+pub fn start_on(db: TestDatabase, name: &str) -> Running {
     let files = temp_dir(&format!("{name}-files"));
     let runtime = tokio::runtime::Builder::new_multi_thread()
         .worker_threads(2)
@@ -90,11 +116,6 @@ pub fn repo_root() -> PathBuf {
         .to_path_buf()
 }
 
-/// A small PDF that passes the office's check (header and end marker).
-pub fn tiny_pdf(text: &str) -> Vec<u8> {
-    format!("%PDF-1.7\n% {text}\n1 0 obj\n<<>>\nendobj\ntrailer\n<<>>\n%%EOF\n").into_bytes()
-}
-
 /// A device store holding the demo inspection with its photos and one delivered report.
 pub fn device_with_demo(dir: &Path) -> (Store, String) {
     let mut store = Store::open(&dir.join("device.sqlite")).unwrap();
@@ -125,19 +146,49 @@ pub fn device_with_demo(dir: &Path) -> (Store, String) {
     (store, outcome.inspection_id)
 }
 
-/// A photo of the given size whose pixels depend on `seed` (so each seed is its own file).
-pub fn photo(seed: u64, width: u32, height: u32) -> Vec<u8> {
-    let mut pixels = Vec::with_capacity((width * height * 3) as usize);
-    let mut state = seed
-        .wrapping_mul(6364136223846793005)
-        .wrapping_add(1442695040888963407);
-    for _ in 0..width * height {
-        state = state.wrapping_mul(6364136223846793005).wrapping_add(1);
-        pixels.extend_from_slice(&[
-            (state >> 33) as u8,
-            (state >> 41) as u8,
-            (state >> 49) as u8,
-        ]);
+/// Pushes until the office acknowledges, waiting out an office or database that is down
+/// (at most `tries` attempts, 100 ms apart); returns the answer, the last attempt's time and
+/// the attempts made. Any other refusal fails the test.
+pub fn push_until_acknowledged(
+    device: &undercroft_core::sync::Office,
+    id: &str,
+    request: &undercroft_core::sync::PushRequest,
+    files: &std::collections::HashMap<String, Vec<u8>>,
+    tries: usize,
+) -> (
+    undercroft_core::sync::PushAnswer,
+    std::time::Duration,
+    usize,
+) {
+    use undercroft_core::sync::OfficeError;
+    for attempt in 1..=tries {
+        let started = std::time::Instant::now();
+        match device.push_revision(id, request, |sha| Ok(files[sha].clone())) {
+            Ok((answer, _, _)) => return (answer, started.elapsed(), attempt),
+            Err(OfficeError::Unreachable(_)) => {}
+            Err(OfficeError::Refused { status: 503, .. }) => {}
+            Err(OfficeError::Refused {
+                status: 500,
+                message,
+            }) if message.contains("connection") => {}
+            Err(other) => panic!("push of {id} refused: {other}"),
+        }
+        std::thread::sleep(std::time::Duration::from_millis(100));
     }
-    undercroft_core::photo::encode_rgb(width, height, pixels, 80).unwrap()
+    panic!("push of {id} not acknowledged after {tries} tries");
+}
+
+/// Checks every revision's files are stored, on disk and whole; returns the number of files.
+pub fn every_revisions_files_present(server: &Running) -> usize {
+    let missing = server.sql(
+        "SELECT count(*) FROM revision_files rf LEFT JOIN blobs b ON b.sha256 = rf.sha256 WHERE b.sha256 IS NULL",
+    );
+    assert_eq!(missing, ["0"], "every file a revision names has its row");
+    let hashes = server.sql("SELECT sha256 FROM blobs");
+    for sha in &hashes {
+        let path = server.files.join(&sha[..2]).join(sha);
+        let bytes = std::fs::read(&path).unwrap_or_else(|e| panic!("{}: {e}", path.display()));
+        assert_eq!(&undercroft_core::store::content_hash(&bytes), sha);
+    }
+    hashes.len()
 }

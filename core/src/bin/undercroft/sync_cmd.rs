@@ -27,7 +27,9 @@ pub fn run(args: &SyncArgs, db: Option<&Path>) -> anyhow::Result<()> {
         link.token = token.trim().into();
     }
     if link.url.is_empty() {
-        anyhow::bail!("no office address yet: give --office https://... (it is kept for next time)");
+        anyhow::bail!(
+            "no office address yet: give --office https://... (it is kept for next time)"
+        );
     }
     let office = Office::new(&link.url, &link.token)?;
     if args.office.is_some() || args.token.is_some() {
@@ -42,7 +44,10 @@ pub fn run(args: &SyncArgs, db: Option<&Path>) -> anyhow::Result<()> {
         println!("  refused {id}: {why}");
     }
     if !summary.refused.is_empty() {
-        anyhow::bail!("{} inspection(s) were refused by the office", summary.refused.len());
+        anyhow::bail!(
+            "{} inspection(s) were refused by the office",
+            summary.refused.len()
+        );
     }
     Ok(())
 }
