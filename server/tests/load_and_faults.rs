@@ -103,7 +103,7 @@ fn every_push_acknowledged_before_the_server_was_killed_is_there_after_it_restar
         .port();
     let url = format!("http://127.0.0.1:{port}");
     let spawn = || {
-        let child = std::process::Command::new(env!("CARGO_BIN_EXE_undercroft-server"))
+        let mut child = std::process::Command::new(env!("CARGO_BIN_EXE_undercroft-server"))
             .args(["--database-url", &server.db.url, "--files"])
             .arg(&server.files)
             .args(["serve", "--listen", &format!("127.0.0.1:{port}")])
@@ -117,6 +117,8 @@ fn every_push_acknowledged_before_the_server_was_killed_is_there_after_it_restar
             }
             std::thread::sleep(std::time::Duration::from_millis(25));
         }
+        child.kill().ok();
+        child.wait().ok();
         panic!("the server did not start");
     };
     let mut child = spawn();

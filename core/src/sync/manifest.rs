@@ -324,7 +324,8 @@ mod tests {
 
     #[test]
     fn every_kind_of_bad_manifest_is_refused_in_words() {
-        let cases: Vec<(fn(&mut Manifest), &str)> = vec![
+        type Spoil = fn(&mut Manifest);
+        let cases: Vec<(Spoil, &str)> = vec![
             (|m| m.inspection = "{".into(), "inspection:"),
             (
                 |m| m.images[0].report_sha256 = "../../etc/passwd".into(),

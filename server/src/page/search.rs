@@ -25,7 +25,7 @@ pub async fn page_handler(office: Arc<Office>, headers: HeaderMap, search: Searc
     };
     let form = format!(
         "<form class=\"search\" method=\"get\" action=\"/office\" role=\"search\">{}{}{}{}{}{}\
-         <label>&nbsp;<button>Search</button></label></form>",
+         <div class=\"actions\"><button type=\"submit\">Search</button></div></form>",
         field("address", "Address", &search.address, "text"),
         field("client", "Client", &search.client, "text"),
         field("inspector", "Inspector", &search.inspector, "text"),

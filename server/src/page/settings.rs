@@ -81,7 +81,7 @@ fn render(caller: &Caller, firm: &FirmSettings, message: Option<(&str, bool)>) -
              <label>Default dead load, psf <input name=\"dead_psf\" inputmode=\"decimal\" value=\"{}\"></label>\
              <label>Licences, one a line: name: number <textarea name=\"licenses\" rows=\"5\">{}</textarea></label>\
              <label>Counties, one a line: county | edition | local amendments <textarea name=\"counties\" rows=\"5\">{}</textarea></label>\
-             <label>&nbsp;<button>Save</button></label></form>",
+             <div class=\"actions\"><button type=\"submit\">Save</button></div></form>",
             esc(&firm.company),
             number(firm.live_psf),
             number(firm.dead_psf),

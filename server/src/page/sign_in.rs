@@ -1,5 +1,6 @@
 //! Signing in to the office page with a token issued by the office, kept in a cookie the
-//! page's own requests carry (HttpOnly, SameSite=Strict; Secure behind TLS).
+//! page's own requests carry (HttpOnly; SameSite=Lax, so a link from an e-mail opens signed
+//! in while another site cannot post with it; Secure behind TLS).
 
 use super::html::{esc, page};
 use crate::Office;
@@ -63,7 +64,7 @@ pub async fn sign_in(
                 [(
                     header::SET_COOKIE,
                     format!(
-                        "{COOKIE}={}; Path=/; HttpOnly; SameSite=Strict; Max-Age=43200{secure}",
+                        "{COOKIE}={}; Path=/; HttpOnly; SameSite=Lax; Max-Age=43200{secure}",
                         form_data.token.trim()
                     ),
                 )],
@@ -79,7 +80,7 @@ pub async fn sign_out() -> Response {
     (
         [(
             header::SET_COOKIE,
-            format!("{COOKIE}=; Path=/; HttpOnly; SameSite=Strict; Max-Age=0"),
+            format!("{COOKIE}=; Path=/; HttpOnly; SameSite=Lax; Max-Age=0"),
         )],
         Redirect::to("/office"),
     )

@@ -1,7 +1,7 @@
 //! Shared set-up of the office server's tests: a database of the test's own, the server
 //! running in this process on a loopback port, tokens, and a device store holding the demo
 //! inspection with its photos and a delivered report.
-#![allow(dead_code)]
+#![allow(dead_code, unused_imports)]
 
 use std::path::{Path, PathBuf};
 use std::sync::Arc;
