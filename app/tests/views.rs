@@ -356,3 +356,23 @@ fn the_joist_walk_shows_the_place_and_carries_the_previous_joist_forward() {
     let nowhere = render("/walk/run-kitchen/not-a-place");
     assert!(nowhere.contains("This is not a place along a run."));
 }
+
+#[test]
+fn settings_offer_the_office_and_say_what_the_firm_sent() {
+    let html = render("/settings");
+    assert!(
+        html.contains("The firm&#39;s office") || html.contains("The firm's office"),
+        "{html}"
+    );
+    assert!(html.contains("id=\"office-url\""));
+    assert!(
+        html.contains("type=\"password\""),
+        "the token is not shown as typed"
+    );
+    // The demo has no delivered report: nothing is finished yet, and the button says so.
+    assert!(html.contains("Send 0 finished to the office"), "{html}");
+    assert!(
+        !html.contains("From the office"),
+        "no firm settings taken yet"
+    );
+}

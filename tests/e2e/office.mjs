@@ -3,7 +3,8 @@
 // this test's own in the PostgreSQL cluster `scripts/with-postgres` started; then office
 // staff sign in with a token, search by address, client, date, inspector and finding words,
 // open the inspection's findings and download its delivered PDF; an inspector with nothing
-// sent sees nothing, and a revoked token is refused.
+// sent sees nothing, and a revoked token is refused. Last, the phone app's settings screen
+// sends another device's finished inspection and shows the firm's settings it took.
 //
 // Usage: node office.mjs   (env UNDERCROFT_TEST_DATABASE_URL: an admin URL of a running
 // cluster; UNDERCROFT_BIN: the folder of the built binaries, default target/debug;
@@ -59,6 +60,24 @@ function serve() {
       if (m) {
         clearTimeout(timer);
         resolve(m[1]);
+      }
+    });
+  });
+}
+
+/** The phone app (liveview) on a store; resolves with its address. */
+function startApp(db) {
+  return new Promise((resolve, reject) => {
+    const proc = spawn(path.join(bin, "undercroft-liveview"), ["--db", db], { stdio: ["ignore", "pipe", "inherit"] });
+    let out = "";
+    const timer = setTimeout(() => reject(new Error("the app did not start in 30 s")), 30000);
+    proc.on("error", reject);
+    proc.stdout.on("data", (chunk) => {
+      out += chunk;
+      const m = out.match(/listening on (http:\/\/\S+)/);
+      if (m) {
+        clearTimeout(timer);
+        resolve({ proc, url: m[1] });
       }
     });
   });
@@ -177,6 +196,29 @@ async function main() {
   await page.goto(`${url}/office`);
   await page.getByText("no longer valid").waitFor();
   await shot(page, "revoked");
+
+  console.log("app: the settings screen sends a finished inspection to the office");
+  const tablet = path.join(work, "tablet.sqlite");
+  const onTablet = (...args) => execFileSync(path.join(bin, "undercroft"), ["--db", tablet, ...args], { encoding: "utf8" }).trim();
+  const copyId = onTablet("import", "--as-copy", path.join(repo, "demo-data/demo-inspection.json")).match(/^imported (\S+)/)[1];
+  onTablet("report", "--inspection", copyId, "--output", path.join(work, "tablet.pdf"), "--to", "Dana Whitlock");
+  const app = await startApp(tablet);
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+  const screen = await phone.newPage();
+  screen.setDefaultTimeout(30000);
+  await screen.goto(`${app.url}/settings`);
+  await screen.locator("#office-url").fill(url);
+  await screen.locator("#office-token").fill(ana);
+  await screen.locator("#office-sync").tap();
+  const outcome = screen.locator("#office-outcome");
+  await outcome.waitFor();
+  assert.match(await outcome.innerText(), /^1 sent; 0 already at the office/);
+  await screen.locator("#firm-settings").waitFor();
+  assert.match(await screen.locator("#firm-settings").innerText(), /Lantern Hill Inspections/);
+  await screen.screenshot({ path: path.join(shots, "office-07-app-sync.png"), fullPage: true });
+  await screen.locator("#office-sync").tap();
+  await screen.getByText("0 sent; 1 already at the office").waitFor();
+  app.proc.kill("SIGKILL");
 
   await browser.close();
   running.removeAllListeners("exit");

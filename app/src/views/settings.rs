@@ -1,7 +1,7 @@
-//! Settings: the inspector, screen, units, code edition and default loads; saved as they
-//! change.
+//! Settings: the inspector, screen, units, code edition and default loads, saved as they
+//! change; and the firm's office to send finished inspections to.
 
-use crate::components::TopBar;
+use crate::components::{OfficeSync, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
 use undercroft_core::forms::CODE_EDITIONS;
@@ -81,6 +81,7 @@ pub fn SettingsView() -> Element {
             if let Some(e) = error() {
                 p { class: "field-error", "{e}" }
             }
+            OfficeSync {}
         }
     }
 }

@@ -142,6 +142,15 @@ impl Store {
         self.photos.root()
     }
 
+    /// The database file, for opening a second connection from another thread (the office
+    /// sync runs beside the screens).
+    pub fn db_path(&self) -> Option<PathBuf> {
+        self.conn
+            .path()
+            .filter(|p| !p.is_empty())
+            .map(PathBuf::from)
+    }
+
     /// Where built reports are written: a folder beside the photos.
     pub fn report_dir(&self) -> PathBuf {
         let root = self.photos.root();

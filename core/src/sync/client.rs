@@ -84,8 +84,8 @@ impl SyncSummary {
             ));
         }
         parts.push(format!(
-            "{} files sent ({} KB), {} the office already had",
-            self.files_sent,
+            "{} sent ({} KB), {} the office already had",
+            plural(self.files_sent, "file", "files"),
             self.bytes_sent.div_ceil(1024),
             self.files_already_there
         ));
@@ -102,6 +102,15 @@ impl SyncSummary {
             parts.push("the firm's settings taken".into());
         }
         parts.join("; ")
+    }
+}
+
+/// "1 file", "3 files".
+fn plural(n: usize, one: &str, many: &str) -> String {
+    if n == 1 {
+        format!("1 {one}")
+    } else {
+        format!("{n} {many}")
     }
 }
 
