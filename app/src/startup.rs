@@ -141,6 +141,12 @@ pub fn Root(db: String) -> Element {
             .map_err(|e| e.to_string())
     });
     let failed = use_demo_later(state.as_ref().ok().cloned());
+    // Whatever was finished while the office was out of reach goes now, if it can.
+    use_hook(|| {
+        if let Ok(state) = &state {
+            crate::components::sync_if_linked(state);
+        }
+    });
     match state {
         Ok(state) => {
             use_context_provider(|| state);

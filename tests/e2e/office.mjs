@@ -45,6 +45,7 @@ const undercroft = (...args) =>
   execFileSync(path.join(bin, "undercroft"), ["--db", store, ...args], { encoding: "utf8" }).trim();
 
 let running = null;
+let appProc = null;
 function serve() {
   return new Promise((resolve, reject) => {
     const proc = spawn(path.join(bin, "undercroft-server"), ["--database-url", dbUrl, "--files", files, "serve", "--listen", "127.0.0.1:0"], {
@@ -178,6 +179,12 @@ async function main() {
   console.log("office: firm settings");
   await page.getByRole("link", { name: "Firm settings" }).click();
   await page.locator('input[name="company"]').fill("Lantern Hill Inspections");
+  // An edition the engine does not know is refused in words, and nothing typed is lost.
+  await page.locator('textarea[name="counties"]').fill("Marrow County | IRC 1990 | No notches in the middle third");
+  await page.getByRole("button", { name: "Save" }).click();
+  await page.getByRole("alert").waitFor();
+  assert.match(await page.getByRole("alert").innerText(), /IRC 1990/);
+  assert.equal(await page.locator('input[name="company"]').inputValue(), "Lantern Hill Inspections");
   await page.locator('textarea[name="counties"]').fill("Marrow County | IRC 2021 | No notches in the middle third");
   await page.getByRole("button", { name: "Save" }).click();
   await page.getByText("Saved.").waitFor();
@@ -203,6 +210,7 @@ async function main() {
   const copyId = onTablet("import", "--as-copy", path.join(repo, "demo-data/demo-inspection.json")).match(/^imported (\S+)/)[1];
   onTablet("report", "--inspection", copyId, "--output", path.join(work, "tablet.pdf"), "--to", "Dana Whitlock");
   const app = await startApp(tablet);
+  appProc = app.proc;
   const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
   const screen = await phone.newPage();
   screen.setDefaultTimeout(30000);
@@ -218,6 +226,21 @@ async function main() {
   await screen.screenshot({ path: path.join(shots, "office-07-app-sync.png"), fullPage: true });
   await screen.locator("#office-sync").tap();
   await screen.getByText("0 sent; 1 already at the office").waitFor();
+
+  console.log("app: a report delivered while the office is set is sent by itself");
+  await screen.goto(`${app.url}/inspection/${copyId}/report`);
+  await screen.locator("#build-report").tap();
+  await screen.locator("#report-path").waitFor({ timeout: 120000 });
+  const revisions = async () => {
+    const answer = await fetch(`${url}/api/v1/inspections/${copyId}`, { headers: { Authorization: `Bearer ${ana}` } });
+    return (await answer.json()).revisions.length;
+  };
+  for (let n = 0; n < 300 && (await revisions()) < 2; n++) await new Promise((r) => setTimeout(r, 100));
+  assert.equal(await revisions(), 2, "the new delivery reached the office as a second revision");
+  // Opening the app again sends by itself too: nothing new by now, and it says so.
+  await screen.goto(`${app.url}/settings`);
+  await screen.getByText("1 already at the office").waitFor();
+  assert.match(await screen.locator("#office-last").innerText(), /^Last sent \d{4}-\d{2}-\d{2} \d{2}:\d{2} .*: 0 sent; 1 already at the office/);
   app.proc.kill("SIGKILL");
 
   await browser.close();
@@ -231,5 +254,6 @@ async function main() {
 main().catch((e) => {
   console.error(e);
   if (running) running.kill("SIGKILL");
+  if (appProc) appProc.kill("SIGKILL");
   process.exit(1);
 });

@@ -24,7 +24,7 @@ pub use girder_svg::GirderSvg;
 pub use live_card::LiveCard;
 pub use mark_editor::MarkEditor;
 pub use observation_list::ObservationList;
-pub use office_sync::OfficeSync;
+pub use office_sync::{sync_if_linked, OfficeSync};
 pub use path_fields::{PathChange, PathFields};
 pub use photos::{PhotoMessage, PhotoOutcome, PhotoPicker, Photos};
 pub use question_card::QuestionCard;

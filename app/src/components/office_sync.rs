@@ -1,14 +1,16 @@
 //! The office on the settings screen: the office's address and the token it issued, kept as
 //! typed; a button that sends the finished inspections (those with a delivered report) and
 //! takes the firm's settings, run on its own thread and connection so the screens stay live;
-//! what it did, or why it could not, in words.
+//! what it did, or why it could not, in words. The same send runs by itself after a report
+//! is delivered and when the app starts, whenever the office is set.
 
 use crate::use_app;
 use dioxus::prelude::*;
 use undercroft_core::store::{OfficeLink, Store};
 use undercroft_core::sync::Office;
 
-/// Sends and takes on a plain thread with its own connection to the store.
+/// Sends and takes on a plain thread with its own connection to the store, and keeps how it
+/// went in the store.
 fn sync_in_background(
     db: std::path::PathBuf,
 ) -> futures_channel::mpsc::UnboundedReceiver<Result<String, String>> {
@@ -18,17 +20,50 @@ fn sync_in_background(
             .map_err(|e| e.to_string())
             .and_then(|mut store| {
                 let link = store.office_link().map_err(|e| e.to_string())?;
-                let office = Office::new(&link.url, &link.token).map_err(|e| e.to_string())?;
-                let summary = office.sync(&mut store).map_err(|e| e.to_string())?;
-                let mut text = summary.text();
-                for (id, why) in &summary.refused {
-                    text.push_str(&format!(". Refused {id}: {why}"));
-                }
-                Ok(text)
+                let sent = Office::new(&link.url, &link.token)
+                    .and_then(|office| office.sync(&mut store))
+                    .map(|summary| {
+                        let mut text = summary.text();
+                        for (id, why) in &summary.refused {
+                            text.push_str(&format!(". Refused {id}: {why}"));
+                        }
+                        text
+                    })
+                    .map_err(|e| e.to_string());
+                let (ok, text) = match &sent {
+                    Ok(t) => (true, t.as_str()),
+                    Err(e) => (false, e.as_str()),
+                };
+                store
+                    .record_sync_outcome(ok, text)
+                    .map_err(|e| e.to_string())?;
+                sent
             });
         let _ = tx.unbounded_send(outcome);
     });
     rx
+}
+
+/// Sends to the office in the background when the store knows one (after a delivery, at
+/// start); the outcome is kept in the store and the screens refresh when it is done.
+pub fn sync_if_linked(app: &crate::AppState) {
+    let (linked, db) = {
+        let store = app.store.borrow();
+        let link = store.office_link().unwrap_or_default();
+        (
+            !link.url.is_empty() && !link.token.is_empty(),
+            store.db_path(),
+        )
+    };
+    let (true, Some(db)) = (linked, db) else {
+        return;
+    };
+    let mut rx = sync_in_background(db);
+    let mut revision = app.revision;
+    spawn(async move {
+        let _ = rx.recv().await;
+        revision += 1;
+    });
 }
 
 /// "1 county", "3 counties".
@@ -60,6 +95,7 @@ pub fn OfficeSync() -> Element {
         })
     };
     let firm = app.store.borrow().firm_settings().ok().flatten();
+    let last = app.store.borrow().last_sync_outcome().ok().flatten();
     let finished = app
         .store
         .borrow()
@@ -109,7 +145,14 @@ pub fn OfficeSync() -> Element {
             match outcome() {
                 Some(Ok(text)) => rsx! { p { id: "office-outcome", role: "status", "{text}" } },
                 Some(Err(why)) => rsx! { p { id: "office-outcome", class: "field-error", role: "alert", "{why}" } },
-                None => rsx! {},
+                None => match last {
+                    Some(last) => rsx! {
+                        p { id: "office-last", class: if last.ok { "hint" } else { "field-error" },
+                            "Last sent {undercroft_core::store::local_time(&last.at)}: {last.text}"
+                        }
+                    },
+                    None => rsx! {},
+                },
             }
             if let Some(firm) = firm {
                 p { id: "firm-settings", class: "hint",

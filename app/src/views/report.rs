@@ -147,6 +147,7 @@ pub fn ReportView(id: String) -> Element {
                                     bytes.len() as f64 / 1e6
                                 )));
                                 built.set(Some(path));
+                                crate::components::sync_if_linked(&app);
                             }
                             Err(e) => progress.set(Some(format!(
                                 "The report was written but not recorded: {e}"

@@ -21,7 +21,7 @@ pub use files::{content_hash, is_hash, write_durably};
 pub use inspections::{InspectionSummary, ListFilter, NewInspection};
 pub use migrate::{APPLICATION_ID, SCHEMA_VERSION};
 pub use notes::{DeliveredReport, FindingNote};
-pub use office::{OfficeLink, OutgoingRevision, PushedRevision};
+pub use office::{OfficeLink, OutgoingRevision, PushedRevision, SyncOutcome};
 pub use photo_undo::RemovedPhoto;
 pub use photos::{prepare_photo, PreparedPhoto, StoredPhoto};
 pub use settings::{Screen, Settings};

@@ -18,6 +18,17 @@ pub struct OfficeLink {
     pub token: String,
 }
 
+/// How the last sync with the office went, kept so any screen can say it.
+#[derive(Debug, Clone, PartialEq, Default, Serialize, Deserialize)]
+#[serde(default)]
+pub struct SyncOutcome {
+    /// UTC, RFC 3339.
+    pub at: String,
+    pub ok: bool,
+    /// What was sent and taken, or why it could not be.
+    pub text: String,
+}
+
 /// What the office acknowledged for one inspection.
 #[derive(Debug, Clone, PartialEq)]
 pub struct PushedRevision {
@@ -72,6 +83,21 @@ impl Store {
 
     pub fn save_office_link(&mut self, link: &OfficeLink) -> Result<()> {
         self.put_setting("office", link)
+    }
+
+    /// Keeps how a sync went (now).
+    pub fn record_sync_outcome(&mut self, ok: bool, text: &str) -> Result<()> {
+        let outcome = SyncOutcome {
+            at: super::now_utc(),
+            ok,
+            text: text.into(),
+        };
+        self.put_setting("office_last", &outcome)
+    }
+
+    /// How the last sync went, if there was one.
+    pub fn last_sync_outcome(&self) -> Result<Option<SyncOutcome>> {
+        self.setting("office_last")
     }
 
     /// The firm's settings as last taken from the office, if ever.
@@ -250,4 +276,120 @@ fn hash_file(path: &std::path::Path) -> Result<(String, u64)> {
         .map(|b| format!("{b:02x}"))
         .collect();
     Ok((hex, total))
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::photo::test_images::{camera_jpeg, upright_scene};
+    use crate::store::{content_hash, NewInspection};
+
+    fn temp(name: &str) -> PathBuf {
+        let dir = std::env::temp_dir().join(format!(
+            "undercroft-office-{name}-{}-{}",
+            std::process::id(),
+            super::super::new_id()
+        ));
+        std::fs::create_dir_all(&dir).unwrap();
+        dir
+    }
+
+    #[test]
+    fn only_delivered_inspections_go_and_their_manifest_names_each_file_by_its_hash() {
+        let dir = temp("outgoing");
+        let mut store = Store::open(&dir.join("s.sqlite")).unwrap();
+        let mut demo = crate::interchange::demo();
+        demo.photos.clear();
+        store.import_inspection(&demo).unwrap();
+        assert!(
+            store.finished_inspections().unwrap().is_empty(),
+            "nothing delivered yet"
+        );
+        let jpeg = camera_jpeg(&upright_scene(640, 480), 6);
+        let photo = store.add_photo("obs-family-decay", &jpeg, "Decay").unwrap();
+        let pdf = b"%PDF-1.7\n%%EOF\n".to_vec();
+        store
+            .record_report(&demo.id, "Report.pdf", &pdf, "[]", "Dana")
+            .unwrap();
+        assert_eq!(store.finished_inspections().unwrap(), vec![demo.id.clone()]);
+
+        let out = store.outgoing_revision(&demo.id).unwrap();
+        assert_eq!(out.manifest.images.len(), 1);
+        let image = &out.manifest.images[0];
+        assert_eq!(image.photo_id, photo.id);
+        // The original is named by the photo's own content hash; every file by its bytes.
+        assert_eq!(
+            image.original_sha256.as_deref(),
+            Some(content_hash(&jpeg).as_str())
+        );
+        for (sha, path) in &out.files {
+            assert_eq!(&content_hash(&std::fs::read(path).unwrap()), sha);
+        }
+        assert_eq!(out.manifest.reports[0].sha256, content_hash(&pdf));
+        assert!(out.manifest.reports[0].pdf_sent);
+        assert_eq!(out.reports_without_pdf, 0);
+        // The same store, asked again, gives the same content hash.
+        let again = store.outgoing_revision(&demo.id).unwrap();
+        assert_eq!(
+            again.manifest.content_sha256(),
+            out.manifest.content_sha256()
+        );
+        // A delivered PDF the device no longer holds is recorded, not sent.
+        std::fs::remove_file(store.delivered_pdf_path(&content_hash(&pdf))).unwrap();
+        let without = store.outgoing_revision(&demo.id).unwrap();
+        assert!(!without.manifest.reports[0].pdf_sent);
+        assert_eq!(without.reports_without_pdf, 1);
+        std::fs::remove_dir_all(&dir).ok();
+    }
+
+    #[test]
+    fn what_was_pushed_the_firms_settings_and_the_last_outcome_are_kept() {
+        let dir = temp("kept");
+        let db = dir.join("s.sqlite");
+        let mut store = Store::open(&db).unwrap();
+        let id = store
+            .create_inspection(&NewInspection {
+                address: "1 Elm".into(),
+                date: "2026-11-30".into(),
+                ..Default::default()
+            })
+            .unwrap();
+        store.record_push(&id, &"a".repeat(64), 7).unwrap();
+        store.record_push(&id, &"b".repeat(64), 9).unwrap();
+        let device = store.device_id().unwrap();
+        store
+            .save_firm_settings(&crate::sync::FirmSettings {
+                company: "Lantern Hill Inspections".into(),
+                code_edition: "IRC 2021".into(),
+                ..Default::default()
+            })
+            .unwrap();
+        store
+            .record_sync_outcome(false, "the office could not be reached")
+            .unwrap();
+        drop(store);
+        let store = Store::open(&db).unwrap();
+        let pushed = store.pushed_revision(&id).unwrap().unwrap();
+        assert_eq!(
+            (pushed.content_sha256, pushed.revision),
+            ("b".repeat(64), 9)
+        );
+        let mut store = store;
+        assert_eq!(
+            store.device_id().unwrap(),
+            device,
+            "the device keeps its id"
+        );
+        assert_eq!(
+            store.settings().unwrap().company,
+            "Lantern Hill Inspections"
+        );
+        assert_eq!(store.settings().unwrap().code_edition, "IRC 2021");
+        let last = store.last_sync_outcome().unwrap().unwrap();
+        assert!(!last.ok && last.text.contains("could not be reached"));
+        // Deleting the inspection forgets what was pushed of it.
+        store.delete_inspection(&id).unwrap();
+        assert_eq!(store.pushed_revision(&id).unwrap(), None);
+        std::fs::remove_dir_all(&dir).ok();
+    }
 }

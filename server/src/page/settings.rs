@@ -13,7 +13,7 @@ use serde::Deserialize;
 use std::sync::Arc;
 use undercroft_core::sync::{CountyRule, FirmSettings, LicenseEntry};
 
-#[derive(Deserialize, Default)]
+#[derive(Deserialize, Default, Clone)]
 #[serde(default)]
 pub struct SettingsForm {
     company: String,
@@ -24,17 +24,31 @@ pub struct SettingsForm {
     counties: String,
 }
 
-fn render(caller: &Caller, firm: &FirmSettings, message: Option<(&str, bool)>) -> Html<String> {
-    let licenses: Vec<String> = firm
-        .licenses
-        .iter()
-        .map(|l| format!("{}: {}", l.inspector, l.number))
-        .collect();
-    let counties: Vec<String> = firm
-        .counties
-        .iter()
-        .map(|c| format!("{} | {} | {}", c.county, c.code_edition, c.local_amendments))
-        .collect();
+/// The form's text for settings as stored.
+fn as_form(firm: &FirmSettings) -> SettingsForm {
+    let number = |v: Option<f64>| v.map(|x| x.to_string()).unwrap_or_default();
+    SettingsForm {
+        company: firm.company.clone(),
+        code_edition: firm.code_edition.clone(),
+        live_psf: number(firm.live_psf),
+        dead_psf: number(firm.dead_psf),
+        licenses: firm
+            .licenses
+            .iter()
+            .map(|l| format!("{}: {}", l.inspector, l.number))
+            .collect::<Vec<_>>()
+            .join("\n"),
+        counties: firm
+            .counties
+            .iter()
+            .map(|c| format!("{} | {} | {}", c.county, c.code_edition, c.local_amendments))
+            .collect::<Vec<_>>()
+            .join("\n"),
+    }
+}
+
+/// The form as typed (or as stored), with a message above it.
+fn render(caller: &Caller, form: &SettingsForm, message: Option<(&str, bool)>) -> Html<String> {
     let editions: String = std::iter::once("")
         .chain(
             undercroft_core::forms::CODE_EDITIONS
@@ -44,7 +58,7 @@ fn render(caller: &Caller, firm: &FirmSettings, message: Option<(&str, bool)>) -
         .map(|e| {
             format!(
                 "<option value=\"{e}\"{}>{}</option>",
-                if e == firm.code_edition {
+                if e == form.code_edition {
                     " selected"
                 } else {
                     ""
@@ -57,7 +71,6 @@ fn render(caller: &Caller, firm: &FirmSettings, message: Option<(&str, bool)>) -
             )
         })
         .collect();
-    let number = |v: Option<f64>| v.map(|x| x.to_string()).unwrap_or_default();
     let message = message
         .map(|(text, ok)| {
             format!(
@@ -82,11 +95,11 @@ fn render(caller: &Caller, firm: &FirmSettings, message: Option<(&str, bool)>) -
              <label>Licences, one a line: name: number <textarea name=\"licenses\" rows=\"5\">{}</textarea></label>\
              <label>Counties, one a line: county | edition | local amendments <textarea name=\"counties\" rows=\"5\">{}</textarea></label>\
              <div class=\"actions\"><button type=\"submit\">Save</button></div></form>",
-            esc(&firm.company),
-            number(firm.live_psf),
-            number(firm.dead_psf),
-            esc(&licenses.join("\n")),
-            esc(&counties.join("\n")),
+            esc(&form.company),
+            esc(&form.live_psf),
+            esc(&form.dead_psf),
+            esc(&form.licenses),
+            esc(&form.counties),
         ),
     ))
 }
@@ -100,7 +113,7 @@ pub async fn show(State(office): State<Arc<Office>>, headers: HeaderMap) -> Resp
         return super::problem_page(&e);
     }
     match office.firm_settings().await {
-        Ok(firm) => render(&caller, &firm.unwrap_or_default(), None).into_response(),
+        Ok(firm) => render(&caller, &as_form(&firm.unwrap_or_default()), None).into_response(),
         Err(e) => super::problem_page(&e),
     }
 }
@@ -165,18 +178,16 @@ pub async fn save(
     }
     let firm = match parse(&form) {
         Ok(f) => f,
-        Err(problem) => {
-            return render(&caller, &FirmSettings::default(), Some((&problem, false)))
-                .into_response()
-        }
+        // What was typed stays in the form, with what is wrong with it.
+        Err(problem) => return render(&caller, &form, Some((&problem, false))).into_response(),
     };
     match office.save_firm_settings(&caller, &firm).await {
         Ok(()) => render(
             &caller,
-            &firm,
+            &as_form(&firm),
             Some(("Saved. Devices take them at their next sync.", true)),
         )
         .into_response(),
-        Err(e) => render(&caller, &firm, Some((&e.to_string(), false))).into_response(),
+        Err(e) => render(&caller, &form, Some((&e.to_string(), false))).into_response(),
     }
 }
