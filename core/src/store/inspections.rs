@@ -56,12 +56,16 @@ impl Store {
         crate::model::check_date(new.date.trim()).map_err(StoreError::Invalid)?;
         let id = new_id();
         let now = now_utc();
-        let firm_loads = firm.filter(|_| new.room_use_above.is_none());
+        // The firm's dead load stands unless heavy finishes are said; its live load only
+        // where the rooms above are not said (a room use picked on the device wins).
         let loads = LoadSettings {
             room_use_above: new.room_use_above,
             heavy_finish: Some(new.heavy_finish),
-            live_psf: firm_loads.as_ref().and_then(|f| f.live_psf),
-            dead_psf: firm_loads
+            live_psf: firm
+                .as_ref()
+                .and_then(|f| f.live_psf)
+                .filter(|_| new.room_use_above.is_none()),
+            dead_psf: firm
                 .as_ref()
                 .and_then(|f| f.dead_psf)
                 .filter(|_| !new.heavy_finish),

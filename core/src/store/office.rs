@@ -387,6 +387,30 @@ mod tests {
         assert_eq!(store.settings().unwrap().code_edition, "IRC 2021");
         let last = store.last_sync_outcome().unwrap().unwrap();
         assert!(!last.ok && last.text.contains("could not be reached"));
+        // The firm's dead load fills a new inspection unless heavy finishes are said; its
+        // live load only where no room use was picked.
+        let mut firm = store.firm_settings().unwrap().unwrap();
+        firm.live_psf = Some(50.0);
+        firm.dead_psf = Some(15.0);
+        store.save_firm_settings(&firm).unwrap();
+        let loads_of = |store: &mut Store, new: NewInspection| {
+            let id = store.create_inspection(&new).unwrap();
+            store.load_inspection(&id).unwrap().loads
+        };
+        let plain = NewInspection {
+            address: "2 Elm".into(),
+            date: "2026-11-30".into(),
+            ..Default::default()
+        };
+        let loads = loads_of(&mut store, plain.clone());
+        assert_eq!((loads.live_psf, loads.dead_psf), (Some(50.0), Some(15.0)));
+        let picked = NewInspection {
+            room_use_above: Some(crate::model::RoomUse::Sleeping),
+            heavy_finish: true,
+            ..plain
+        };
+        let loads = loads_of(&mut store, picked);
+        assert_eq!((loads.live_psf, loads.dead_psf), (None, None));
         // Deleting the inspection forgets what was pushed of it.
         store.delete_inspection(&id).unwrap();
         assert_eq!(store.pushed_revision(&id).unwrap(), None);

@@ -14,8 +14,9 @@ pub struct FirmSettings {
     /// The edition a county has not named otherwise, e.g. "IRC 2018".
     pub code_edition: String,
     pub counties: Vec<CountyRule>,
-    /// Live and dead load, psf, for floors whose room use the inspector has not set.
+    /// Live load, psf, for floors whose room use the inspector has not picked.
     pub live_psf: Option<f64>,
+    /// Dead load, psf, for floors without heavy finishes (tile, stone).
     pub dead_psf: Option<f64>,
 }
 
