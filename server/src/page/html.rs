@@ -39,6 +39,9 @@ h1{font-size:1.5rem;margin:.6rem 0}
 h2{font-size:1.15rem;margin:1.4rem 0 .5rem}
 form.search{display:grid;grid-template-columns:repeat(auto-fit,minmax(12rem,1fr));gap:.6rem;background:#fffdf8;padding:.9rem;border:1px solid #d8cfbf;border-radius:.4rem}
 form.search .actions{display:flex;align-items:flex-end}
+form.settings{display:grid;gap:.8rem;max-width:40rem;background:#fffdf8;padding:1rem;border:1px solid #d8cfbf;border-radius:.4rem}
+form.settings textarea{min-height:6rem}
+form.settings .actions button{min-width:8rem}
 label{display:flex;flex-direction:column;font-size:.85rem;gap:.2rem}
 input,textarea,select{font:inherit;padding:.35rem .45rem;border:1px solid #b9ad98;border-radius:.3rem;background:#fff}
 button{font:inherit;padding:.4rem .9rem;border:0;border-radius:.3rem;background:#b7791f;color:#fff;cursor:pointer}

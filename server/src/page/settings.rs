@@ -87,7 +87,7 @@ fn render(caller: &Caller, form: &SettingsForm, message: Option<(&str, bool)>) -
         &format!(
             "<h1>Firm settings</h1>{message}\
              <p class=\"muted\">Every device takes these at its next sync; they fill the fields of new inspections.</p>\
-             <form method=\"post\" action=\"/office/settings\" class=\"search\">\
+             <form method=\"post\" action=\"/office/settings\" class=\"settings\">\
              <label>Company <input name=\"company\" value=\"{}\"></label>\
              <label>Code edition <select name=\"code_edition\">{editions}</select></label>\
              <label>Default live load, psf <input name=\"live_psf\" inputmode=\"decimal\" value=\"{}\"></label>\
