@@ -32,6 +32,25 @@ fn main() {
                 .unwrap()
         })
         .collect();
+    // One device alone first: a push's own time, without others queued beside it.
+    let alone = Device::new(&url, &tokens[0]).unwrap();
+    let mut solo: Vec<Duration> = (0..if quick { 3 } else { 20 })
+        .map(|i| {
+            let (id, request, files) = synthetic_push(9_999, i, photos, 5);
+            let t = Instant::now();
+            alone
+                .push_revision(&id, &request, |sha| Ok(files[sha].clone()))
+                .expect("the push is acknowledged");
+            t.elapsed()
+        })
+        .collect();
+    solo.sort();
+    println!(
+        "one device alone, {photos} photos a push: median {:.0?}, p95 {:.0?} ({} pushes)",
+        solo[solo.len() / 2],
+        solo[(solo.len() * 95 / 100).min(solo.len() - 1)],
+        solo.len()
+    );
     // Pushes are made before the clock starts: only the exchange is timed.
     let prepared: Vec<Vec<_>> = (0..devices)
         .map(|d| {

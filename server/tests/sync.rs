@@ -164,7 +164,12 @@ fn two_devices_that_changed_one_inspection_both_keep_their_revision() {
     let list = page("/office");
     assert!(list.contains("1 revision from another device"), "{list}");
     let shown = page(&format!("/office/inspections/{id}"));
-    assert!(shown.contains(&format!("pushed beside revision {phone_rev} from another device: both kept")), "{shown}");
+    assert!(
+        shown.contains(&format!(
+            "pushed beside revision {phone_rev} from another device: both kept"
+        )),
+        "{shown}"
+    );
     assert!(shown.contains("as the tablet has it") && shown.contains("Revision 3"));
     for d in [dir_a, dir_b] {
         std::fs::remove_dir_all(d).ok();
