@@ -36,7 +36,7 @@ impl FileStore {
         let temp = self
             .root
             .join("incoming")
-            .join(format!("{sha256}.{}", uuid_like()));
+            .join(format!("{sha256}.{}", crate::random::hex(8)));
         let mut file = std::fs::File::create(&temp)?;
         file.write_all(bytes)?;
         file.sync_all()?;
@@ -48,11 +48,4 @@ impl FileStore {
     pub fn read(&self, sha256: &str) -> std::io::Result<Vec<u8>> {
         std::fs::read(self.path(sha256))
     }
-}
-
-/// A name no other upload in this process or another uses at the same moment.
-fn uuid_like() -> String {
-    let mut raw = [0u8; 8];
-    getrandom::fill(&mut raw).expect("the system's random source");
-    raw.iter().map(|b| format!("{b:02x}")).collect()
 }

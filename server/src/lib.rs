@@ -13,6 +13,7 @@ pub mod page;
 pub mod people;
 pub mod pg_cluster;
 pub mod push;
+mod random;
 pub mod synthetic;
 
 use auth::Caller;

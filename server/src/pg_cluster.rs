@@ -139,7 +139,7 @@ impl Cluster {
         let dir = std::env::temp_dir().join(format!(
             "undercroft-pg-{}-{}",
             std::process::id(),
-            uuid_suffix()
+            crate::random::hex(6)
         ));
         std::fs::create_dir_all(&dir)?;
         if is_root() {
@@ -232,12 +232,6 @@ impl Drop for Cluster {
         let _ = stop.status();
         let _ = std::fs::remove_dir_all(&self.dir);
     }
-}
-
-fn uuid_suffix() -> String {
-    let mut raw = [0u8; 6];
-    getrandom::fill(&mut raw).expect("the system's random source");
-    raw.iter().map(|b| format!("{b:02x}")).collect()
 }
 
 #[cfg(test)]

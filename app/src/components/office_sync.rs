@@ -6,6 +6,7 @@
 
 use crate::use_app;
 use dioxus::prelude::*;
+use undercroft_core::report::count;
 use undercroft_core::store::{OfficeLink, Store};
 use undercroft_core::sync::Office;
 
@@ -64,15 +65,6 @@ pub fn sync_if_linked(app: &crate::AppState) {
         let _ = rx.recv().await;
         revision += 1;
     });
-}
-
-/// "1 county", "3 counties".
-fn counted(n: usize, one: &str, many: &str) -> String {
-    if n == 1 {
-        format!("1 {one}")
-    } else {
-        format!("{n} {many}")
-    }
 }
 
 #[component]
@@ -158,7 +150,7 @@ pub fn OfficeSync() -> Element {
                 p { id: "firm-settings", class: "hint",
                     "From the office: {firm.company}"
                     if !firm.code_edition.is_empty() { ", {firm.code_edition}" }
-                    ", {counted(firm.counties.len(), \"county\", \"counties\")}, {counted(firm.licenses.len(), \"licence\", \"licences\")}. New inspections take them."
+                    ", {count(firm.counties.len(), \"county\", \"counties\")}, {count(firm.licenses.len(), \"licence\", \"licences\")}. New inspections take them."
                 }
             }
         }

@@ -14,6 +14,8 @@ mod renumber;
 mod side_view;
 mod wording;
 
+pub use wording::count;
+
 pub use build::{build_report, PhotoFiles, ReportInput};
 pub use girder_view::girder_view_of;
 pub use model::*;

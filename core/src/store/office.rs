@@ -2,6 +2,7 @@
 //! firm's settings as last taken, what was pushed of each inspection, and a finished
 //! inspection's manifest with where each of its files is.
 
+use super::settings::{read_setting, write_setting};
 use super::{Result, Store, StoreError};
 use crate::sync::{FirmSettings, ImageRef, Manifest, ReportRef};
 use rusqlite::{params, OptionalExtension};
@@ -50,21 +51,11 @@ pub struct OutgoingRevision {
 
 impl Store {
     fn setting<T: for<'de> Deserialize<'de>>(&self, key: &str) -> Result<Option<T>> {
-        let text: Option<String> = self
-            .conn
-            .query_row("SELECT value FROM settings WHERE key = ?1", [key], |r| {
-                r.get(0)
-            })
-            .optional()?;
-        Ok(text.and_then(|t| serde_json::from_str(&t).ok()))
+        read_setting(&self.conn, key)
     }
 
     fn put_setting<T: Serialize>(&mut self, key: &str, value: &T) -> Result<()> {
-        self.conn.execute(
-            "INSERT INTO settings (key, value) VALUES (?1, ?2) ON CONFLICT (key) DO UPDATE SET value = ?2",
-            (key, serde_json::to_string(value)?),
-        )?;
-        Ok(())
+        write_setting(&self.conn, key, value)
     }
 
     /// This device's id, made once and kept.
@@ -111,14 +102,8 @@ impl Store {
         let mut settings = self.settings()?;
         firm.apply_to(&mut settings);
         let tx = self.conn.transaction()?;
-        tx.execute(
-            "INSERT INTO settings (key, value) VALUES ('firm', ?1) ON CONFLICT (key) DO UPDATE SET value = ?1",
-            [serde_json::to_string(firm)?],
-        )?;
-        tx.execute(
-            "INSERT INTO settings (key, value) VALUES ('app', ?1) ON CONFLICT (key) DO UPDATE SET value = ?1",
-            [serde_json::to_string(&settings)?],
-        )?;
+        write_setting(&tx, "firm", firm)?;
+        write_setting(&tx, super::settings::KEY, &settings)?;
         tx.commit()?;
         Ok(())
     }

@@ -66,28 +66,43 @@ impl Default for Settings {
     }
 }
 
-const KEY: &str = "app";
+/// The key of the device's own settings.
+pub(super) const KEY: &str = "app";
+
+/// The value kept under a settings key, if any and if it still reads.
+pub(super) fn read_setting<T: for<'de> Deserialize<'de>>(
+    conn: &rusqlite::Connection,
+    key: &str,
+) -> Result<Option<T>> {
+    let text: Option<String> = conn
+        .query_row("SELECT value FROM settings WHERE key = ?1", [key], |r| {
+            r.get(0)
+        })
+        .optional()?;
+    Ok(text.and_then(|t| serde_json::from_str(&t).ok()))
+}
+
+/// Keeps a value under a settings key (in the caller's transaction, if it is one).
+pub(super) fn write_setting<T: Serialize>(
+    conn: &rusqlite::Connection,
+    key: &str,
+    value: &T,
+) -> Result<()> {
+    conn.execute(
+        "INSERT INTO settings (key, value) VALUES (?1, ?2) ON CONFLICT (key) DO UPDATE SET value = ?2",
+        (key, serde_json::to_string(value)?),
+    )?;
+    Ok(())
+}
 
 impl Store {
     /// The saved settings, or the defaults.
     pub fn settings(&self) -> Result<Settings> {
-        let text: Option<String> = self
-            .conn
-            .query_row("SELECT value FROM settings WHERE key = ?1", [KEY], |r| {
-                r.get(0)
-            })
-            .optional()?;
-        Ok(text
-            .and_then(|t| serde_json::from_str(&t).ok())
-            .unwrap_or_default())
+        Ok(read_setting(&self.conn, KEY)?.unwrap_or_default())
     }
 
     pub fn save_settings(&mut self, settings: &Settings) -> Result<()> {
-        self.conn.execute(
-            "INSERT INTO settings (key, value) VALUES (?1, ?2) ON CONFLICT (key) DO UPDATE SET value = ?2",
-            (KEY, serde_json::to_string(settings)?),
-        )?;
-        Ok(())
+        write_setting(&self.conn, KEY, settings)
     }
 }
 

@@ -85,7 +85,7 @@ impl SyncSummary {
         }
         parts.push(format!(
             "{} sent ({} KB), {} the office already had",
-            plural(self.files_sent, "file", "files"),
+            crate::report::count(self.files_sent, "file", "files"),
             self.bytes_sent.div_ceil(1024),
             self.files_already_there
         ));
@@ -102,15 +102,6 @@ impl SyncSummary {
             parts.push("the firm's settings taken".into());
         }
         parts.join("; ")
-    }
-}
-
-/// "1 file", "3 files".
-fn plural(n: usize, one: &str, many: &str) -> String {
-    if n == 1 {
-        format!("1 {one}")
-    } else {
-        format!("{n} {many}")
     }
 }
 
