@@ -10,31 +10,6 @@ use undercroft_core::store::content_hash;
 use undercroft_core::sync::Office as Device;
 use undercroft_server::auth::Role;
 
-fn agent() -> ureq::Agent {
-    ureq::Agent::config_builder()
-        .http_status_as_error(false)
-        .build()
-        .into()
-}
-
-/// Status and body of a request with a token (or none).
-fn call(method: &str, url: &str, token: Option<&str>, body: Option<Vec<u8>>) -> (u16, String) {
-    let agent = agent();
-    let request = ureq::http::Request::builder().method(method).uri(url);
-    let request = match token {
-        Some(t) => request.header("Authorization", format!("Bearer {t}")),
-        None => request,
-    };
-    let request = request
-        .header("Content-Type", "application/json")
-        .body(body.unwrap_or_default())
-        .unwrap();
-    let mut response = agent.run(request).unwrap();
-    let status = response.status().as_u16();
-    let text = response.body_mut().read_to_string().unwrap_or_default();
-    (status, text)
-}
-
 #[test]
 fn every_route_refuses_a_missing_wrong_or_revoked_token() {
     let server = start("access_tokens");

@@ -117,13 +117,7 @@ fn two_devices_that_changed_one_inspection_both_keep_their_revision() {
         b.conflicts, 1,
         "the tablet's revision does not follow the phone's: {b:?}"
     );
-    let view: serde_json::Value = ureq::get(format!("{}/api/v1/inspections/{id}", server.url))
-        .header("Authorization", &format!("Bearer {office}"))
-        .call()
-        .unwrap()
-        .body_mut()
-        .read_json()
-        .unwrap();
+    let view = get_json(&format!("{}/api/v1/inspections/{id}", server.url), &office);
     let revisions = view["revisions"].as_array().unwrap();
     assert_eq!(
         revisions.len(),
@@ -140,16 +134,13 @@ fn two_devices_that_changed_one_inspection_both_keep_their_revision() {
     );
     // The phone's revision is still there to read.
     let phone_rev = revisions[1]["id"].as_i64().unwrap();
-    let older: serde_json::Value = ureq::get(format!(
-        "{}/api/v1/inspections/{id}?revision={phone_rev}",
-        server.url
-    ))
-    .header("Authorization", &format!("Bearer {office}"))
-    .call()
-    .unwrap()
-    .body_mut()
-    .read_json()
-    .unwrap();
+    let older = get_json(
+        &format!(
+            "{}/api/v1/inspections/{id}?revision={phone_rev}",
+            server.url
+        ),
+        &office,
+    );
     assert_eq!(older["address"], "12 Quarry Lane, as the phone has it");
     // The office page says so, in the list and on the inspection.
     let page = |path: &str| {
@@ -197,16 +188,15 @@ fn the_firms_settings_fill_a_new_inspection_on_the_device() {
         dead_psf: None,
     };
     // An inspector may not set them; the office may.
+    let settings = format!("{}/api/v1/settings", server.url);
     let put = |token: &str| {
-        ureq::put(format!("{}/api/v1/settings", server.url))
-            .header("Authorization", &format!("Bearer {token}"))
-            .config()
-            .http_status_as_error(false)
-            .build()
-            .send_json(&firm)
-            .unwrap()
-            .status()
-            .as_u16()
+        call(
+            "PUT",
+            &settings,
+            Some(token),
+            Some(serde_json::to_vec(&firm).unwrap()),
+        )
+        .0
     };
     assert_eq!(put(&token), 403);
     assert_eq!(put(&office_token), 200);

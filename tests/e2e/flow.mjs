@@ -8,7 +8,8 @@
 // Screenshots of every screen go to target/e2e-screens/.
 
 import { chromium } from "playwright-core";
-import { spawn, execFileSync } from "node:child_process";
+import { execFileSync } from "node:child_process";
+import { startListening } from "./listening.mjs";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -32,22 +33,9 @@ const CLIENT = "Søren Ōkubo-Adeyemi";
 let running = null;
 let currentPage = null;
 function startServer() {
-  return new Promise((resolve, reject) => {
-    const proc = spawn(server, ["--db", db], { stdio: ["ignore", "pipe", "inherit"] });
-    running = proc;
-    let out = "";
-    const timer = setTimeout(() => reject(new Error("the server did not start in 30 s")), 30000);
-    proc.on("error", reject);
-    proc.on("exit", (code) => reject(new Error(`the server exited with ${code}`)));
-    proc.stdout.on("data", (chunk) => {
-      out += chunk;
-      const m = out.match(/listening on (http:\/\/\S+)/);
-      if (m) {
-        clearTimeout(timer);
-        resolve({ proc, url: m[1] });
-      }
-    });
-  });
+  const started = startListening(server, ["--db", db], "the server");
+  running = started.proc;
+  return started.ready;
 }
 
 function stopServer(proc) {

@@ -11,7 +11,8 @@
 // CHROMIUM: the browser). Screenshots go to target/e2e-screens/office-*.png.
 
 import { chromium } from "playwright-core";
-import { spawn, execFileSync } from "node:child_process";
+import { execFileSync } from "node:child_process";
+import { startListening } from "./listening.mjs";
 import crypto from "node:crypto";
 import fs from "node:fs";
 import os from "node:os";
@@ -46,42 +47,19 @@ const undercroft = (...args) =>
 
 let running = null;
 let appProc = null;
-function serve() {
-  return new Promise((resolve, reject) => {
-    const proc = spawn(path.join(bin, "undercroft-server"), ["--database-url", dbUrl, "--files", files, "serve", "--listen", "127.0.0.1:0"], {
-      stdio: ["ignore", "pipe", "inherit"],
-    });
-    running = proc;
-    let out = "";
-    const timer = setTimeout(() => reject(new Error("the office server did not start in 30 s")), 30000);
-    proc.on("exit", (code) => reject(new Error(`the office server exited with ${code}`)));
-    proc.stdout.on("data", (chunk) => {
-      out += chunk;
-      const m = out.match(/listening on (http:\/\/\S+)/);
-      if (m) {
-        clearTimeout(timer);
-        resolve(m[1]);
-      }
-    });
-  });
+
+/** The office server on a free loopback port; resolves with its address. */
+async function serve() {
+  const started = startListening(path.join(bin, "undercroft-server"), ["--database-url", dbUrl, "--files", files, "serve", "--listen", "127.0.0.1:0"], "the office server");
+  running = started.proc;
+  return (await started.ready).url;
 }
 
-/** The phone app (liveview) on a store; resolves with its address. */
+/** The phone app (liveview) on a store; resolves with { proc, url }. */
 function startApp(db) {
-  return new Promise((resolve, reject) => {
-    const proc = spawn(path.join(bin, "undercroft-liveview"), ["--db", db], { stdio: ["ignore", "pipe", "inherit"] });
-    let out = "";
-    const timer = setTimeout(() => reject(new Error("the app did not start in 30 s")), 30000);
-    proc.on("error", reject);
-    proc.stdout.on("data", (chunk) => {
-      out += chunk;
-      const m = out.match(/listening on (http:\/\/\S+)/);
-      if (m) {
-        clearTimeout(timer);
-        resolve({ proc, url: m[1] });
-      }
-    });
-  });
+  const started = startListening(path.join(bin, "undercroft-liveview"), ["--db", db], "the app");
+  appProc = started.proc;
+  return started.ready;
 }
 
 let shotCount = 0;
@@ -210,7 +188,6 @@ async function main() {
   const copyId = onTablet("import", "--as-copy", path.join(repo, "demo-data/demo-inspection.json")).match(/^imported (\S+)/)[1];
   onTablet("report", "--inspection", copyId, "--output", path.join(work, "tablet.pdf"), "--to", "Dana Whitlock");
   const app = await startApp(tablet);
-  appProc = app.proc;
   const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
   const screen = await phone.newPage();
   screen.setDefaultTimeout(30000);

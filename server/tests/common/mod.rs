@@ -56,6 +56,43 @@ pub fn temp_dir(name: &str) -> PathBuf {
     dir
 }
 
+/// The runtime the office runs on in a test: two workers, as on the machines it is sized for.
+fn runtime() -> tokio::runtime::Runtime {
+    tokio::runtime::Builder::new_multi_thread()
+        .worker_threads(2)
+        .enable_all()
+        .build()
+        .unwrap()
+}
+
+/// Status and body of a request with a token (or none), whatever the status.
+pub fn call(method: &str, url: &str, token: Option<&str>, body: Option<Vec<u8>>) -> (u16, String) {
+    let agent: ureq::Agent = ureq::Agent::config_builder()
+        .http_status_as_error(false)
+        .build()
+        .into();
+    let request = ureq::http::Request::builder().method(method).uri(url);
+    let request = match token {
+        Some(t) => request.header("Authorization", format!("Bearer {t}")),
+        None => request,
+    };
+    let request = request
+        .header("Content-Type", "application/json")
+        .body(body.unwrap_or_default())
+        .unwrap();
+    let mut response = agent.run(request).unwrap();
+    let status = response.status().as_u16();
+    let text = response.body_mut().read_to_string().unwrap_or_default();
+    (status, text)
+}
+
+/// A successful GET's JSON.
+pub fn get_json(url: &str, token: &str) -> serde_json::Value {
+    let (status, body) = call("GET", url, Some(token), None);
+    assert_eq!(status, 200, "GET {url}: {body}");
+    serde_json::from_str(&body).unwrap()
+}
+
 /// The server on a loopback port with a database of its own.
 pub fn start(name: &str) -> Running {
     start_on(test_database(name), name)
@@ -65,11 +102,7 @@ pub fn start(name: &str) -> Running {
 /// run the server as a child process and read the database beside it.
 pub fn open_only(db: TestDatabase, name: &str) -> Running {
     let files = temp_dir(&format!("{name}-files"));
-    let runtime = tokio::runtime::Builder::new_multi_thread()
-        .worker_threads(2)
-        .enable_all()
-        .build()
-        .unwrap();
+    let runtime = runtime();
     let office = runtime
         .block_on(Office::open(&db.url, &files))
         .expect("the office opens");
@@ -85,11 +118,7 @@ pub fn open_only(db: TestDatabase, name: &str) -> Running {
 /// The server on a loopback port, on the given database.
 pub fn start_on(db: TestDatabase, name: &str) -> Running {
     let files = temp_dir(&format!("{name}-files"));
-    let runtime = tokio::runtime::Builder::new_multi_thread()
-        .worker_threads(2)
-        .enable_all()
-        .build()
-        .unwrap();
+    let runtime = runtime();
     let (office, url) = runtime.block_on(async {
         let office = Office::open(&db.url, &files)
             .await
