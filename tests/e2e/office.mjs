@@ -169,12 +169,28 @@ async function main() {
   await shot(page, "settings");
   assert.match(undercroft("sync"), /the firm's settings taken/);
 
+  console.log("office: issue a token from the page, then revoke it");
+  await page.getByRole("link", { name: "People" }).click();
+  await page.locator('form.settings input[name="name"]').fill("Cara Lind");
+  await page.getByRole("button", { name: "Issue a token" }).click();
+  const cara = (await page.locator("#issued-token").innerText()).trim();
+  assert.match(cara, /^uct_[0-9a-f]{16}_[0-9a-f]{64}$/);
+  const listAs = async (token) => (await fetch(`${url}/api/v1/inspections`, { headers: { Authorization: `Bearer ${token}` } })).status;
+  assert.equal(await listAs(cara), 200);
+  assert.equal(await page.locator("#tokens tr.token").count(), 4, "three from the command line, one from the page");
+  await shot(page, "people");
+  await page.getByRole("button", { name: /Revoke Cara Lind's token/ }).click();
+  await page.getByText("revoked: it no longer works").waitFor();
+  assert.equal(await listAs(cara), 401, "a revoked token stops at once");
+  assert.doesNotMatch(await page.locator("main").innerText(), new RegExp(cara.slice(21)), "the secret is shown once only");
+
   console.log("office: an inspector with nothing sent sees nothing; a revoked token is refused");
   await page.getByRole("button", { name: "Sign out" }).click();
   await page.locator('input[name="token"]').fill(ben);
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.locator("#none-found").waitFor();
   assert.equal(await page.getByRole("link", { name: "Firm settings" }).count(), 0);
+  assert.equal((await page.goto(`${url}/office/people`)).status(), 403, "people and tokens are the office's");
   const direct = await page.goto(`${url}/office/inspections/${id}`);
   assert.equal(direct.status(), 404);
   server("revoke-token", ben.slice(4, 20));

@@ -41,6 +41,9 @@ form.search{display:grid;grid-template-columns:repeat(auto-fit,minmax(12rem,1fr)
 form.search .actions{display:flex;align-items:flex-end}
 form.settings{display:grid;gap:.8rem;max-width:40rem;background:#fffdf8;padding:1rem;border:1px solid #d8cfbf;border-radius:.4rem}
 form.settings textarea{min-height:6rem}
+form.inline{display:inline;margin-left:.5rem}
+button.revoke{background:#7a1d0a;padding:.15rem .6rem;font-size:.85rem}
+code{font-size:.9rem;word-break:break-all}
 form.settings .actions button{min-width:8rem}
 label{display:flex;flex-direction:column;font-size:.85rem;gap:.2rem}
 input,textarea,select{font:inherit;padding:.35rem .45rem;border:1px solid #b9ad98;border-radius:.3rem;background:#fff}
@@ -66,7 +69,7 @@ pub fn page(title: &str, who: Option<(&str, bool)>, body: &str) -> String {
             "<a href=\"/office\">Archive</a>{}<span class=\"who\">{}</span>\
              <form method=\"post\" action=\"/office/sign-out\"><button>Sign out</button></form>",
             if office {
-                "<a href=\"/office/settings\">Firm settings</a>"
+                "<a href=\"/office/settings\">Firm settings</a><a href=\"/office/people\">People</a>"
             } else {
                 ""
             },

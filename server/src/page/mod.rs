@@ -1,9 +1,10 @@
 //! The office page: plain HTML rendered on the server (no script), to sign in with a token,
 //! search the archive, open an inspection's findings and revisions, download its delivered
-//! PDFs, and (office staff) set the firm's settings.
+//! PDFs, and (office staff) set the firm's settings and issue and revoke tokens.
 
 mod html;
 mod inspection;
+mod people;
 mod search;
 mod settings;
 mod sign_in;
@@ -29,6 +30,11 @@ pub fn routes() -> Router<Arc<Office>> {
             get(inspection::download),
         )
         .route("/office/settings", get(settings::show).post(settings::save))
+        .route("/office/people", get(people::show).post(people::issue))
+        .route(
+            "/office/people/revoke/{id}",
+            axum::routing::post(people::revoke),
+        )
 }
 
 /// Whether a request came over TLS through the proxy the server runs behind.
