@@ -85,19 +85,17 @@ fn undercroft_sync_without_an_office_or_with_a_wrong_one_says_so() {
         .unwrap();
     assert_eq!(none.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&none.stderr).contains("no office address yet"));
-    let ftp = undercroft()
-        .arg("--db")
-        .arg(&db)
-        .args(["sync", "--office", "ftp://office", "--token", "x"])
-        .output()
-        .unwrap();
+    let sync_to = |office: &str, token: &str| {
+        undercroft()
+            .arg("--db")
+            .arg(&db)
+            .args(["sync", "--office", office, "--token", token])
+            .output()
+            .unwrap()
+    };
+    let ftp = sync_to("ftp://office", "x");
     assert!(String::from_utf8_lossy(&ftp.stderr).contains("not an http:// or https:// address"));
-    let gone = undercroft()
-        .arg("--db")
-        .arg(&db)
-        .args(["sync", "--office", "http://127.0.0.1:9", "--token", "uct_x"])
-        .output()
-        .unwrap();
+    let gone = sync_to("http://127.0.0.1:9", "uct_x");
     assert!(
         String::from_utf8_lossy(&gone.stderr).contains("could not be reached"),
         "{}",

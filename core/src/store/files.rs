@@ -207,9 +207,13 @@ pub fn write_durably(path: &Path, bytes: &[u8]) -> std::io::Result<()> {
 /// Lower-case hex SHA-256 of the bytes.
 pub fn content_hash(bytes: &[u8]) -> String {
     use sha2::{Digest, Sha256};
-    let digest = Sha256::digest(bytes);
-    let mut out = String::with_capacity(64);
-    for b in digest.iter() {
+    hex(&Sha256::digest(bytes))
+}
+
+/// Lower-case hex of a digest.
+pub(crate) fn hex(digest: &[u8]) -> String {
+    let mut out = String::with_capacity(2 * digest.len());
+    for b in digest {
         out.push_str(&format!("{b:02x}"));
     }
     out

@@ -157,9 +157,9 @@ impl Store {
             .join(format!("{sha256}.pdf"))
     }
 
-    /// The inspection as the office will keep it, and where each file it names is. A file
-    /// is named by the SHA-256 of its bytes, read now (a file changed on disk is sent as it
-    /// is, under its own hash).
+    /// The inspection as the office will keep it, and where each file it names is. A report
+    /// image or PDF is named by the SHA-256 of its bytes, read now; an original by the
+    /// content hash the store gave it (the office checks every file against its name).
     pub fn outgoing_revision(&self, inspection_id: &str) -> Result<OutgoingRevision> {
         let inspection = self.load_inspection(inspection_id)?;
         let mut files = HashMap::new();
@@ -172,13 +172,14 @@ impl Store {
             };
             let (report_sha256, report_bytes) = hash_file(report)?;
             files.insert(report_sha256.clone(), report.clone());
-            let original = match photo.original_path.as_ref().filter(|p| p.exists()) {
-                Some(path) => {
-                    let (sha, bytes) = hash_file(path)?;
+            // The original is already named by its content hash (checked when it came in):
+            // only its size is read, not its bytes.
+            let original = match (photo.original_path.as_ref(), photo.hash.as_ref()) {
+                (Some(path), Some(sha)) if path.exists() => {
                     files.insert(sha.clone(), path.clone());
-                    Some((sha, bytes))
+                    Some((sha.clone(), std::fs::metadata(path)?.len()))
                 }
-                None => None,
+                _ => None,
             };
             images.push(ImageRef {
                 photo_id: photo.id,
