@@ -256,12 +256,7 @@ fn hash_file(path: &std::path::Path) -> Result<(String, u64)> {
         hasher.update(&buffer[..n]);
         total += n as u64;
     }
-    let hex = hasher
-        .finalize()
-        .iter()
-        .map(|b| format!("{b:02x}"))
-        .collect();
-    Ok((hex, total))
+    Ok((super::files::hex(&hasher.finalize()), total))
 }
 
 #[cfg(test)]
