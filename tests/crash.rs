@@ -5,7 +5,7 @@
 use std::io::Read;
 use std::process::{Command, Stdio};
 use std::time::Duration;
-use undercroft_core::store::Store;
+use undercroft_store::Store;
 
 const RUNS: usize = 50;
 
@@ -30,7 +30,7 @@ fn photo_bytes() -> Vec<u8> {
     image::DynamicImage::ImageRgb8(image)
         .write_to(&mut std::io::Cursor::new(&mut png), image::ImageFormat::Png)
         .unwrap();
-    undercroft_core::photo::process(&png).unwrap().report_jpeg
+    undercroft_photo::process(&png).unwrap().report_jpeg
 }
 
 #[test]

@@ -8,9 +8,9 @@
 //! southern pine; joists no longer than 18 ft. The Douglas fir-larch, hem-fir and
 //! spruce-pine-fir row is one row: the weakest of the three.
 
-use undercroft_core::lumber::{Grade, LoadDuration, NominalSize, Species};
-use undercroft_core::mechanics::{allowable_span, SpanInput};
-use undercroft_core::units::{Length, Psf};
+use undercroft_engine::lumber::{Grade, LoadDuration, NominalSize, Species};
+use undercroft_engine::mechanics::{allowable_span, SpanInput};
+use undercroft_engine::units::{Length, Psf};
 
 /// (size, [12, 16, 24 in o.c.] as printed, inches)
 const SOUTHERN_PINE: [(u8, [f64; 3]); 4] = [

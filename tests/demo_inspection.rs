@@ -2,12 +2,12 @@
 //! the rule has a limit, and its findings are pinned by a snapshot.
 
 use std::collections::{BTreeMap, BTreeSet};
-use undercroft_core::interchange::{from_json_bytes, to_json};
-use undercroft_core::rules::RULES;
-use undercroft_core::{evaluate, Basis, Status};
+use undercroft_engine::interchange::{from_json_bytes, to_json};
+use undercroft_engine::rules::RULES;
+use undercroft_engine::{evaluate, Basis, Status};
 use undercroft_tests::demo_path;
 
-fn demo() -> undercroft_core::Inspection {
+fn demo() -> undercroft_engine::Inspection {
     let bytes = std::fs::read(demo_path()).expect("demo-data/demo-inspection.json is committed");
     from_json_bytes(&bytes).expect("the demo reads")
 }
@@ -21,7 +21,7 @@ fn demo_reads_without_problems() {
 #[test]
 fn demo_round_trips_through_json() {
     let inspection = demo();
-    let again = undercroft_core::interchange::from_json(&to_json(&inspection)).unwrap();
+    let again = undercroft_engine::interchange::from_json(&to_json(&inspection)).unwrap();
     assert_eq!(again, inspection);
 }
 
@@ -186,7 +186,7 @@ fn observed_damage_reaches_the_top_and_shortens_the_bearing() {
 #[test]
 fn metric_findings_show_no_inches() {
     let mut inspection = demo();
-    inspection.units = undercroft_core::units::UnitSystem::Metric;
+    inspection.units = undercroft_engine::units::UnitSystem::Metric;
     for f in evaluate(&inspection).findings {
         let mut texts = vec![f.summary(), f.recommendation()];
         texts.extend(f.checks.iter().map(|c| c.limit_shown().text));

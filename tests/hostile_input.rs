@@ -4,8 +4,8 @@
 
 use proptest::prelude::*;
 use serde_json::Value;
-use undercroft_core::evaluate;
-use undercroft_core::interchange::from_json;
+use undercroft_engine::evaluate;
+use undercroft_engine::interchange::from_json;
 use undercroft_tests::demo_path;
 
 fn demo_value() -> Value {

@@ -31,7 +31,7 @@ pub fn csv_fields(line: &str) -> Vec<String> {
 
 /// The demo's drawn photos, read from `demo-data/photos`, by photo id.
 pub fn demo_images(
-    inspection: &undercroft_core::Inspection,
+    inspection: &undercroft_engine::Inspection,
 ) -> std::collections::HashMap<String, Vec<u8>> {
     let base = repo_root().join("demo-data");
     inspection

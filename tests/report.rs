@@ -4,11 +4,12 @@
 
 use std::collections::HashSet;
 use std::path::Path;
-use undercroft_core::interchange::from_json;
-use undercroft_core::model::PhotoMark;
-use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
-use undercroft_core::store::{FindingNote, Store};
-use undercroft_core::{evaluate, Inspection};
+use undercroft_engine::interchange::from_json;
+use undercroft_engine::model::FindingNote;
+use undercroft_engine::model::PhotoMark;
+use undercroft_engine::{evaluate, Inspection};
+use undercroft_report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+use undercroft_store::Store;
 use undercroft_tests::{demo_images, demo_path, normalise, tool, TempDir};
 
 fn demo() -> Inspection {
@@ -157,7 +158,7 @@ fn pdf_holds_every_finding_photo_and_name() {
             f.title(),
             f.rule_id()
         );
-        if f.status != undercroft_core::Status::Within {
+        if f.status != undercroft_engine::Status::Within {
             let citation = normalise(&f.citation());
             assert!(
                 text.contains(&citation),
@@ -254,7 +255,7 @@ fn letter_and_a4() {
 fn two_hundred_findings_and_three_hundred_photos_build() {
     let t = TempDir::new("report-big");
     let mut store = Store::open(&t.0.join("store.sqlite")).unwrap();
-    let inspection = undercroft_core::generate::inspection_with_members(60);
+    let inspection = undercroft_engine::generate::inspection_with_members(60);
     store.import_inspection(&inspection).unwrap();
     let owners: Vec<String> = inspection
         .areas

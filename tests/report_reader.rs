@@ -1,17 +1,18 @@
 //! The report as its readers meet it, read back from the PDF with poppler-utils: the first
 //! page says what must be done and by whom, alike findings read as one, the client's pages
 //! carry no rule ids or formulas, the contents point at the right pages. (The demo report's
-//! length, photos and metadata are read back in `core/tests/demo_report.rs`.)
+//! length, photos and metadata are read back in `core/cli/tests/demo_report.rs`.)
 
 use std::path::{Path, PathBuf};
-use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, Report, ReportInput};
-use undercroft_core::store::Store;
-use undercroft_core::units::Length;
-use undercroft_core::{evaluate, Inspection};
+use undercroft_engine::units::Length;
+use undercroft_engine::{evaluate, Inspection};
+use undercroft_report::{build_report, pdf, Paper, PhotoFiles, Report, ReportInput};
+use undercroft_store::Store;
 use undercroft_tests::{demo_images, demo_path, normalise, tool, TempDir};
 
 fn demo() -> Inspection {
-    undercroft_core::interchange::from_json(&std::fs::read_to_string(demo_path()).unwrap()).unwrap()
+    undercroft_engine::interchange::from_json(&std::fs::read_to_string(demo_path()).unwrap())
+        .unwrap()
 }
 
 /// The report value and its PDF for an inspection put in a fresh store with the given images.
@@ -110,7 +111,7 @@ fn the_first_page_says_what_to_do_most_pressing_first() {
     let observed = evaluate(&demo())
         .findings
         .iter()
-        .filter(|f| f.status == undercroft_core::Status::ToEvaluate)
+        .filter(|f| f.status == undercroft_engine::Status::ToEvaluate)
         .count();
     let listed = report
         .actions
@@ -138,7 +139,7 @@ fn the_client_pages_carry_no_rule_ids_or_formulas() {
         .find("For the professional")
         .expect("the professional's section")];
     let client = normalise(client);
-    for rule in undercroft_core::rules::all_rule_infos() {
+    for rule in undercroft_engine::rules::all_rule_infos() {
         // Hyphenated ids cannot be ordinary words ("bridging" is one as well as an id).
         if rule.id.contains('-') {
             assert!(

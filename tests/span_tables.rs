@@ -3,9 +3,9 @@
 //! R502.3.1(2) (floor joists, 40 psf live, L/360). Each row of `data/published-span-cells.csv`
 //! names its source.
 
-use undercroft_core::lumber::{GradeChoice, LoadDuration, NominalSize, Species};
-use undercroft_core::mechanics::{allowable_span, SpanInput};
-use undercroft_core::units::{Length, Psf};
+use undercroft_engine::lumber::{GradeChoice, LoadDuration, NominalSize, Species};
+use undercroft_engine::mechanics::{allowable_span, SpanInput};
+use undercroft_engine::units::{Length, Psf};
 use undercroft_tests::csv_fields;
 
 const CELLS: &str = include_str!("data/published-span-cells.csv");

@@ -3,8 +3,8 @@
 //! the demo inspection as the version-3 code stored it), opened by the current code: each is
 //! upgraded in place and every field survives.
 
-use undercroft_core::interchange::from_json;
-use undercroft_core::store::{ListFilter, Store, SCHEMA_VERSION};
+use undercroft_engine::interchange::from_json;
+use undercroft_store::{ListFilter, Store, SCHEMA_VERSION};
 use undercroft_tests::repo_root;
 
 #[test]
@@ -68,8 +68,8 @@ fn version_1_database_upgrades_with_every_field() {
 
 #[test]
 fn version_3_database_upgrades_and_takes_the_load_path() {
-    use undercroft_core::model::{GirderLine, Post};
-    use undercroft_core::units::Length;
+    use undercroft_engine::model::{GirderLine, Post};
+    use undercroft_engine::units::Length;
     let dir = std::env::temp_dir().join(format!("undercroft-upgrade3-{}", std::process::id()));
     std::fs::create_dir_all(&dir).unwrap();
     let db = dir.join("undercroft.sqlite");

@@ -10,8 +10,8 @@ use undercroft_app::edits::{
     save_area_field, save_framing_field, save_header_field, FramingEdit, FramingOwner,
 };
 use undercroft_app::startup::DEMO_INSPECTION;
-use undercroft_core::forms::{live_check, FramingForm};
-use undercroft_core::store::Store;
+use undercroft_engine::forms::{live_check, FramingForm};
+use undercroft_store::Store;
 
 const DEMO_ID: &str = "0193a1c2-7d00-7000-8000-00000000d001";
 
@@ -33,7 +33,7 @@ fn main() {
     let dir = std::env::temp_dir().join(format!("undercroft-field-bench-{}", std::process::id()));
     let _ = std::fs::remove_dir_all(&dir);
     let mut store = Store::open(&dir.join("bench.sqlite")).expect("store opens");
-    let demo = undercroft_core::interchange::from_json(DEMO_INSPECTION).expect("demo reads");
+    let demo = undercroft_engine::interchange::from_json(DEMO_INSPECTION).expect("demo reads");
     store.import_inspection(&demo).expect("demo stored");
     let inspection = store.load_inspection(DEMO_ID).expect("demo loads");
     let (area, run) = inspection.run("run-kitchen").expect("the kitchen run");

@@ -2,12 +2,12 @@
 //! (and the field-to-save benchmark measures): the form updated, what reads saved at once,
 //! a field that does not read yet keeping its stored value, and each field's problem returned.
 
-use undercroft_core::forms::{
+use undercroft_engine::forms::{
     area_with, framing_question, inspection_with, keep_stored, FieldError, FramingForm, Question,
 };
-use undercroft_core::model::Framing;
-use undercroft_core::store::{Result, Store};
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::model::Framing;
+use undercroft_engine::units::UnitSystem;
+use undercroft_store::{Result, Store};
 
 /// Whose framing is being typed.
 #[derive(Debug, Clone, Copy)]
@@ -145,7 +145,7 @@ mod tests {
         std::fs::create_dir_all(&dir).unwrap();
         let mut store = Store::open(&dir.join("store.sqlite")).unwrap();
         let demo =
-            undercroft_core::interchange::from_json(crate::startup::DEMO_INSPECTION).unwrap();
+            undercroft_engine::interchange::from_json(crate::startup::DEMO_INSPECTION).unwrap();
         store.import_inspection(&demo).unwrap();
         (store, dir)
     }
@@ -279,7 +279,7 @@ mod tests {
     }
 
     /// The run's span as a fresh process would read it.
-    fn store_span(dir: &std::path::Path, id: &str) -> Option<undercroft_core::units::Length> {
+    fn store_span(dir: &std::path::Path, id: &str) -> Option<undercroft_engine::units::Length> {
         let store = Store::open(&dir.join("store.sqlite")).unwrap();
         store
             .load_inspection(id)

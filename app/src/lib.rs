@@ -1,5 +1,5 @@
 //! Undercroft's app: routes, screens and widgets. Components hold no business logic: they read
-//! state and call plain structs from `undercroft-core` (the store, the framing form, the live
+//! state and call plain structs from the core crates (the store, the framing form, the live
 //! check, the engine).
 
 pub mod components;

@@ -10,7 +10,7 @@ use dioxus::desktop::{Config, LogicalSize, WindowBuilder};
 use dioxus::prelude::*;
 use std::time::Instant;
 use undercroft_app::startup::{prepare_store, root_from_context, wants_demo, DemoLater, StorePath};
-use undercroft_core::store::Store;
+use undercroft_store::Store;
 
 static STARTED: std::sync::OnceLock<Instant> = std::sync::OnceLock::new();
 

@@ -4,10 +4,10 @@
 use crate::{App, AppState};
 use dioxus::prelude::*;
 use std::path::Path;
-use undercroft_core::store::{ListFilter, Store};
+use undercroft_store::{ListFilter, Store};
 
 /// The invented demo inspection shipped with the app.
-pub const DEMO_INSPECTION: &str = include_str!("../../demo-data/demo-inspection.json");
+pub const DEMO_INSPECTION: &str = undercroft_engine::interchange::DEMO_JSON;
 
 /// The demo's drawn photos, by the file name the inspection gives them.
 const DEMO_PHOTOS: [(&str, &[u8]); 7] = [
@@ -72,7 +72,7 @@ pub fn wants_demo(db: &Path) -> Result<bool, String> {
 
 /// Puts the demo inspection, with its photos, in the store.
 fn import_demo(mut store: Store) -> Result<(), String> {
-    let demo = undercroft_core::interchange::from_json(DEMO_INSPECTION)
+    let demo = undercroft_engine::interchange::from_json(DEMO_INSPECTION)
         .map_err(|e| format!("the demo inspection does not read: {e}"))?;
     let images = demo
         .photos
@@ -185,8 +185,8 @@ mod tests {
         std::fs::create_dir_all(&dir).unwrap();
         let db = dir.join("store.sqlite");
         super::prepare_store(&db, true).unwrap();
-        let store = undercroft_core::store::Store::open(&db).unwrap();
-        let demo = undercroft_core::interchange::from_json(super::DEMO_INSPECTION).unwrap();
+        let store = undercroft_store::Store::open(&db).unwrap();
+        let demo = undercroft_engine::interchange::from_json(super::DEMO_INSPECTION).unwrap();
         let photos = store.photos_of_inspection(&demo.id).unwrap();
         assert_eq!(photos.len(), super::DEMO_PHOTOS.len());
         assert!(photos

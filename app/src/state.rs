@@ -4,11 +4,11 @@ use crate::edits::{save_framing_field, FieldCheck, FramingEdit, FramingOwner};
 use dioxus::prelude::*;
 use std::cell::RefCell;
 use std::rc::Rc;
-use undercroft_core::forms::{FieldError, FramingForm};
-use undercroft_core::model::{Framing, Inspection};
-use undercroft_core::store::Store;
-use undercroft_core::units::UnitSystem;
-use undercroft_core::{evaluate, Evaluation};
+use undercroft_engine::forms::{FieldError, FramingForm};
+use undercroft_engine::model::{Framing, Inspection};
+use undercroft_engine::units::UnitSystem;
+use undercroft_engine::{evaluate, Evaluation};
+use undercroft_store::Store;
 
 /// An evaluation and what it was made of: (revision, inspection id, findings).
 type Evaluated = (u64, String, Rc<Evaluation>);
@@ -93,7 +93,7 @@ impl AppState {
     /// Runs a change against the store (saved when it returns) and refreshes the screens.
     pub fn change<T>(
         &self,
-        edit: impl FnOnce(&mut Store) -> undercroft_core::store::Result<T>,
+        edit: impl FnOnce(&mut Store) -> undercroft_store::Result<T>,
     ) -> Result<T, String> {
         let result = edit(&mut self.store.borrow_mut()).map_err(|e| e.to_string());
         let mut revision = self.revision;

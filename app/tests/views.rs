@@ -7,7 +7,7 @@ use std::cell::RefCell;
 use std::path::PathBuf;
 use std::rc::Rc;
 use undercroft_app::{App, AppState};
-use undercroft_core::store::Store;
+use undercroft_store::Store;
 
 thread_local! {
     static SETUP: RefCell<(PathBuf, String)> = const { RefCell::new((PathBuf::new(), String::new())) };
@@ -22,8 +22,8 @@ fn TestRoot() -> Element {
     rsx! { App {} }
 }
 
-fn demo() -> undercroft_core::Inspection {
-    undercroft_core::interchange::from_json(include_str!("../../demo-data/demo-inspection.json"))
+fn demo() -> undercroft_engine::Inspection {
+    undercroft_engine::interchange::from_json(include_str!("../../demo-data/demo-inspection.json"))
         .unwrap()
 }
 
@@ -33,7 +33,7 @@ fn render(path: &str) -> String {
 }
 
 /// The HTML of the screen at `path`, with the given inspection in a fresh store.
-fn render_with(path: &str, demo: &undercroft_core::Inspection) -> String {
+fn render_with(path: &str, demo: &undercroft_engine::Inspection) -> String {
     static RENDERS: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
     let n = RENDERS.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
     let dir = std::env::temp_dir().join(format!("undercroft-app-views-{}-{n}", std::process::id()));
@@ -150,7 +150,7 @@ fn findings_list_entries_that_could_not_be_used() {
     let mut inspection = demo();
     // A spacing of 96 in cannot be what was meant: refused, said, never "not entered".
     inspection.areas[0].runs[1].framing.spacing =
-        Some(undercroft_core::units::Length::inches(96.0));
+        Some(undercroft_engine::units::Length::inches(96.0));
     let page = render_with(&format!("/inspection/{DEMO}/findings"), &inspection);
     let html = &page[page.find("<main").expect("the screen")..];
     let problems = &html[html.find("input-problems").expect("the problems card")..];
@@ -334,11 +334,11 @@ fn the_joist_walk_shows_the_place_and_carries_the_previous_joist_forward() {
         .iter_mut()
         .find(|r| r.id == "run-kitchen")
         .unwrap();
-    run.joists.push(undercroft_core::model::Joist {
+    run.joists.push(undercroft_engine::model::Joist {
         id: "walked".into(),
         label: "Joist at 2' 8\"".into(),
-        at: Some(undercroft_core::units::Length::inches(32.0)),
-        framing: undercroft_core::model::Framing {
+        at: Some(undercroft_engine::units::Length::inches(32.0)),
+        framing: undercroft_engine::model::Framing {
             size: "2x12".parse().ok(),
             ..Default::default()
         },

@@ -5,11 +5,11 @@
 
 use std::sync::{Arc, Mutex};
 use std::time::{Duration, Instant};
-use undercroft_core::sync::Office as Device;
 use undercroft_server::auth::Role;
 use undercroft_server::pg_cluster::test_database;
 use undercroft_server::synthetic::synthetic_push;
 use undercroft_server::Office;
+use undercroft_sync::Office as Device;
 
 fn main() {
     let quick = !std::env::args().any(|a| a == "--bench");

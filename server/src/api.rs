@@ -11,7 +11,7 @@ use axum::response::{IntoResponse, Response};
 use axum::Json;
 use serde::Deserialize;
 use std::sync::Arc;
-use undercroft_core::sync::FirmSettings;
+use undercroft_sync::FirmSettings;
 
 pub async fn list(
     State(office): State<Arc<Office>>,

@@ -104,7 +104,7 @@ fn date_or_none(text: &str, what: &str) -> Result<Option<String>, ApiError> {
     if text.is_empty() {
         return Ok(None);
     }
-    undercroft_core::model::check_date(text)
+    undercroft_engine::model::check_date(text)
         .map_err(|e| ApiError::BadRequest(format!("{what}: {e}")))?;
     Ok(Some(text.into()))
 }
@@ -317,9 +317,7 @@ impl Office {
         Ok((row.get(0), bytes))
     }
 
-    pub async fn firm_settings(
-        &self,
-    ) -> Result<Option<undercroft_core::sync::FirmSettings>, ApiError> {
+    pub async fn firm_settings(&self) -> Result<Option<undercroft_sync::FirmSettings>, ApiError> {
         let client = self.pool.get().await?;
         let row = client
             .query_opt("SELECT body FROM firm_settings WHERE id = 1", &[])
@@ -332,7 +330,7 @@ impl Office {
     pub async fn save_firm_settings(
         &self,
         caller: &Caller,
-        firm: &undercroft_core::sync::FirmSettings,
+        firm: &undercroft_sync::FirmSettings,
     ) -> Result<(), ApiError> {
         caller.require_office()?;
         firm.check()

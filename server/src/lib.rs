@@ -78,8 +78,8 @@ impl Office {
 
 /// Every route: the JSON API under `/api/v1`, the office page under `/office`.
 pub fn router(office: Arc<Office>) -> Router {
-    let largest_file = undercroft_core::sync::blob::MAX_IMAGE_BYTES
-        .max(undercroft_core::sync::blob::MAX_PDF_BYTES) as usize;
+    let largest_file =
+        undercroft_sync::blob::MAX_IMAGE_BYTES.max(undercroft_sync::blob::MAX_PDF_BYTES) as usize;
     let api = Router::new()
         .route("/blobs/missing", post(push::missing))
         .route(

@@ -10,10 +10,8 @@ use axum::extract::{Path, State};
 use axum::Json;
 use serde::Deserialize;
 use std::sync::Arc;
-use undercroft_core::sync::{
-    check_blob, BlobError, BlobKind, PushAnswer, PushOutcome, PushRequest,
-};
-use undercroft_core::{Finding, Inspection};
+use undercroft_engine::{Finding, Inspection};
+use undercroft_sync::{check_blob, BlobError, BlobKind, PushAnswer, PushOutcome, PushRequest};
 
 /// Most hashes one "which are missing" question may ask about.
 const MOST_HASHES: usize = 20_000;
@@ -33,11 +31,7 @@ pub async fn missing(
             "ask about at most {MOST_HASHES} files at a time"
         )));
     }
-    if let Some(bad) = list
-        .hashes
-        .iter()
-        .find(|h| !undercroft_core::store::is_hash(h))
-    {
+    if let Some(bad) = list.hashes.iter().find(|h| !undercroft_store::is_hash(h)) {
         return Err(ApiError::BadRequest(format!(
             "\"{}\" is not a SHA-256",
             bad.chars().take(80).collect::<String>()
@@ -72,7 +66,7 @@ pub async fn put_blob(
 ) -> Result<Json<serde_json::Value>, ApiError> {
     let kind = BlobKind::from_key(&kind)
         .ok_or_else(|| ApiError::NotFound(format!("no kind of file called \"{kind}\"")))?;
-    if !undercroft_core::store::is_hash(&sha256) {
+    if !undercroft_store::is_hash(&sha256) {
         return Err(ApiError::BadRequest(
             BlobError::NotAHash(sha256).to_string(),
         ));
@@ -143,7 +137,7 @@ struct FindingRow {
 }
 
 fn finding_rows(inspection: &Inspection) -> Vec<FindingRow> {
-    let evaluation = undercroft_core::evaluate(inspection);
+    let evaluation = undercroft_engine::evaluate(inspection);
     evaluation
         .by_attention()
         .into_iter()
@@ -191,7 +185,7 @@ pub async fn push_revision(
         ));
     }
     if let Some(based_on) = &request.based_on {
-        if !undercroft_core::store::is_hash(based_on) {
+        if !undercroft_store::is_hash(based_on) {
             return Err(ApiError::Unprocessable("based_on is not a SHA-256".into()));
         }
     }
@@ -248,7 +242,7 @@ impl Office {
             });
         }
         let manifest = &request.manifest;
-        let wanted = undercroft_core::sync::client::kinds_of(manifest);
+        let wanted = undercroft_sync::client::kinds_of(manifest);
         let hashes: Vec<String> = wanted.keys().map(|h| h.to_string()).collect();
         let held: Vec<(String, String)> = tx
             .query(

@@ -3,7 +3,7 @@
 
 use std::collections::HashMap;
 use std::path::PathBuf;
-use undercroft_core::sync::PushRequest;
+use undercroft_sync::PushRequest;
 
 fn repo_root() -> PathBuf {
     PathBuf::from(env!("CARGO_MANIFEST_DIR"))
@@ -31,7 +31,7 @@ pub fn photo(seed: u64, width: u32, height: u32) -> Vec<u8> {
             (state >> 49) as u8,
         ]);
     }
-    undercroft_core::photo::encode_rgb(width, height, pixels, 80).unwrap()
+    undercroft_photo::encode_rgb(width, height, pixels, 80).unwrap()
 }
 
 /// A made-up push of the demo inspection under new ids, with `photos` photos: the first
@@ -44,12 +44,12 @@ pub fn synthetic_push(
     photos: u64,
     shared: u64,
 ) -> (String, PushRequest, HashMap<String, Vec<u8>>) {
-    use undercroft_core::sync::{ImageRef, Manifest, ReportRef};
+    use undercroft_sync::{ImageRef, Manifest, ReportRef};
     let demo_text =
         std::fs::read_to_string(repo_root().join("demo-data/demo-inspection.json")).unwrap();
-    let demo = undercroft_core::interchange::from_json(&demo_text).unwrap();
+    let demo = undercroft_engine::interchange::from_json(&demo_text).unwrap();
     let (mut copy, _) =
-        undercroft_core::model::renumber::renumbered(&demo, undercroft_core::store::new_id);
+        undercroft_engine::model::renumber::renumbered(&demo, undercroft_store::new_id);
     copy.property.address = format!("{} Load Test Road, unit {device}", inspection + 1);
     let owner = copy.areas[0].id.clone();
     let mut files = HashMap::new();
@@ -62,9 +62,9 @@ pub fn synthetic_push(
             device * 1_000_000 + 1_000 + inspection * 100 + n
         };
         let bytes = photo(seed, 24, 16);
-        let sha = undercroft_core::store::content_hash(&bytes);
-        let id = undercroft_core::store::new_id();
-        copy.photos.push(undercroft_core::model::PhotoRef {
+        let sha = undercroft_store::content_hash(&bytes);
+        let id = undercroft_store::new_id();
+        copy.photos.push(undercroft_engine::model::PhotoRef {
             id: id.clone(),
             file: format!("photos/{sha}.jpg"),
             attached_to: owner.clone(),
@@ -81,9 +81,9 @@ pub fn synthetic_push(
         files.insert(sha, bytes);
     }
     let pdf = tiny_pdf(&format!("device {device} inspection {inspection}"));
-    let pdf_sha = undercroft_core::store::content_hash(&pdf);
+    let pdf_sha = undercroft_store::content_hash(&pdf);
     let report = ReportRef {
-        id: undercroft_core::store::new_id(),
+        id: undercroft_store::new_id(),
         delivered_at: "2026-11-30T16:00:00Z".into(),
         file_name: "Report.pdf".into(),
         recipient: "Client".into(),
@@ -93,7 +93,7 @@ pub fn synthetic_push(
     };
     files.insert(pdf_sha, pdf);
     let manifest = Manifest {
-        inspection: undercroft_core::interchange::to_json(&copy),
+        inspection: undercroft_engine::interchange::to_json(&copy),
         notes: vec![],
         images,
         reports: vec![report],

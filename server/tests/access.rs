@@ -6,9 +6,9 @@
 mod common;
 
 use common::*;
-use undercroft_core::store::content_hash;
-use undercroft_core::sync::Office as Device;
 use undercroft_server::auth::Role;
+use undercroft_store::content_hash;
+use undercroft_sync::Office as Device;
 
 #[test]
 fn every_route_refuses_a_missing_wrong_or_revoked_token() {
@@ -85,7 +85,7 @@ fn an_inspector_sees_and_pushes_only_their_own_and_the_office_sees_all() {
     let bundle = dir.join("passed-along.zip");
     store.export_bundle(&id, &bundle).unwrap();
     let ben_dir = temp_dir("ben");
-    let mut bens = undercroft_core::store::Store::open(&ben_dir.join("d.sqlite")).unwrap();
+    let mut bens = undercroft_store::Store::open(&ben_dir.join("d.sqlite")).unwrap();
     bens.import_bundle(&bundle).unwrap();
     bens.record_report(&id, "Report.pdf", &tiny_pdf("ben"), "[]", "")
         .unwrap();
@@ -162,7 +162,7 @@ fn planted_hashes_bombs_garbage_and_oversized_bodies_are_refused() {
     assert_eq!(put("image", "..%2F..%2Fetc%2Fpasswd", real.clone()).0, 400);
     assert_eq!(put("script", &content_hash(&real), real.clone()).0, 404);
     // Over the limit: a body larger than a photo may be.
-    let huge = vec![0xFFu8; (undercroft_core::sync::blob::MAX_IMAGE_BYTES + 1) as usize];
+    let huge = vec![0xFFu8; (undercroft_sync::blob::MAX_IMAGE_BYTES + 1) as usize];
     let (status, body) = put("image", &content_hash(&huge), huge);
     assert_eq!(status, 413, "{body}");
     assert_eq!(
@@ -178,8 +178,8 @@ fn planted_hashes_bombs_garbage_and_oversized_bodies_are_refused() {
     // A revision naming files the office lacks, and one whose id is not the path's.
     let dir = temp_dir("hostile");
     let (mut store, id) = device_with_demo(&dir);
-    let outgoing = store.outgoing_revision(&id).unwrap();
-    let request = undercroft_core::sync::PushRequest {
+    let outgoing = undercroft_sync::outgoing_revision(&store, &id).unwrap();
+    let request = undercroft_sync::PushRequest {
         manifest: outgoing.manifest.clone(),
         based_on: None,
         device: store.device_id().unwrap(),

@@ -7,9 +7,9 @@ mod common;
 
 use common::*;
 use std::sync::{Arc, Mutex};
-use undercroft_core::sync::{Office as Device, PushOutcome};
 use undercroft_server::auth::Role;
 use undercroft_server::pg_cluster::{own_database, test_database};
+use undercroft_sync::{Office as Device, PushOutcome};
 
 /// `devices` threads, each pushing `per_device` inspections of `photos` photos (5 shared by
 /// the device's inspections); returns each acknowledgement as (inspection id, revision), and

@@ -6,11 +6,9 @@
 mod common;
 
 use common::*;
-use undercroft_core::store::{NewInspection, OfficeLink};
-use undercroft_core::sync::{
-    CountyRule, FirmSettings, LicenseEntry, Office as Device, PushOutcome,
-};
 use undercroft_server::auth::Role;
+use undercroft_store::{NewInspection, OfficeLink};
+use undercroft_sync::{CountyRule, FirmSettings, LicenseEntry, Office as Device, PushOutcome};
 
 #[test]
 fn a_device_sends_what_changed_and_only_the_files_the_office_lacks() {
@@ -66,7 +64,7 @@ fn a_device_sends_what_changed_and_only_the_files_the_office_lacks() {
     for path in walk_files(&server.files) {
         let bytes = std::fs::read(&path).unwrap();
         assert_eq!(
-            undercroft_core::store::content_hash(&bytes),
+            undercroft_store::content_hash(&bytes),
             path.file_name().unwrap().to_str().unwrap()
         );
     }
@@ -98,7 +96,7 @@ fn two_devices_that_changed_one_inspection_both_keep_their_revision() {
     // The tablet has the same inspection (a bundle from the phone) and its own device id.
     let bundle = dir_a.join("bundle.zip");
     phone.export_bundle(&id, &bundle).unwrap();
-    let mut tablet = undercroft_core::store::Store::open(&dir_b.join("device.sqlite")).unwrap();
+    let mut tablet = undercroft_store::Store::open(&dir_b.join("device.sqlite")).unwrap();
     tablet.import_bundle(&bundle).unwrap();
     tablet
         .record_report(&id, "Report.pdf", &tiny_pdf("first"), "[]", "Dana Whitlock")
@@ -202,7 +200,7 @@ fn the_firms_settings_fill_a_new_inspection_on_the_device() {
     assert_eq!(put(&office_token), 200);
 
     let dir = temp_dir("settings");
-    let mut store = undercroft_core::store::Store::open(&dir.join("device.sqlite")).unwrap();
+    let mut store = undercroft_store::Store::open(&dir.join("device.sqlite")).unwrap();
     let mut settings = store.settings().unwrap();
     settings.inspector_name = "Ana Ruiz".into();
     store.save_settings(&settings).unwrap();
@@ -247,7 +245,7 @@ fn an_upload_cut_off_midway_is_stored_as_nothing_and_the_push_then_completes() {
     let token = server.token("Ana Ruiz", Role::Inspector);
     let dir = temp_dir("cut");
     let (mut store, id) = device_with_demo(&dir);
-    let outgoing = store.outgoing_revision(&id).unwrap();
+    let outgoing = undercroft_sync::outgoing_revision(&store, &id).unwrap();
     let (sha, path) = outgoing
         .files
         .iter()
@@ -290,8 +288,8 @@ fn pushing_the_same_revision_twice_is_answered_as_already_there() {
     let dir = temp_dir("twice");
     let (mut store, id) = device_with_demo(&dir);
     let device = Device::new(&server.url, &token).unwrap();
-    let outgoing = store.outgoing_revision(&id).unwrap();
-    let request = undercroft_core::sync::PushRequest {
+    let outgoing = undercroft_sync::outgoing_revision(&store, &id).unwrap();
+    let request = undercroft_sync::PushRequest {
         manifest: outgoing.manifest.clone(),
         based_on: None,
         device: store.device_id().unwrap(),

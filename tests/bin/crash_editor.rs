@@ -4,9 +4,9 @@
 //! crash-editor DB_PATH
 
 use std::io::Write;
-use undercroft_core::model::*;
-use undercroft_core::store::Store;
-use undercroft_core::units::Length;
+use undercroft_engine::model::*;
+use undercroft_engine::units::Length;
+use undercroft_store::Store;
 
 const INSPECTION: &str = "crash-inspection";
 const JOIST: &str = "crash-joist";
@@ -17,7 +17,7 @@ fn main() {
         .expect("usage: crash-editor DB_PATH");
     let mut store = Store::open(std::path::Path::new(&db)).expect("store opens");
     if store.load_inspection(INSPECTION).is_err() {
-        let mut inspection = undercroft_core::interchange::from_json(
+        let mut inspection = undercroft_engine::interchange::from_json(
             r#"{"format":"undercroft-inspection","version":1,"id":"crash-inspection","property":{"address":"Crash test"},"date":"2026-12-01",
                 "areas":[{"id":"crash-area","name":"Crawlspace","runs":[{"id":"crash-run","label":"Run",
                 "joists":[{"id":"crash-joist","label":"Joist"}]}]}]}"#,

@@ -6,8 +6,8 @@
 //! cargo run -p undercroft-tests --bin make-store-fixture
 
 use rusqlite::{params, Connection};
-use undercroft_core::interchange::from_json;
-use undercroft_core::model::{Framing, Observation};
+use undercroft_engine::interchange::from_json;
+use undercroft_engine::model::{Framing, Observation};
 
 fn main() -> Result<(), Box<dyn std::error::Error>> {
     let root = undercroft_tests::repo_root();

@@ -4,7 +4,7 @@
 
 use super::{PathChange, PathFields};
 use dioxus::prelude::*;
-use undercroft_core::forms::{FieldError, PathField};
+use undercroft_engine::forms::{FieldError, PathField};
 
 #[component]
 pub fn AutosaveFields(

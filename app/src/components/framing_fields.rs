@@ -5,11 +5,11 @@
 use super::{QuestionCard, TapeInput};
 use crate::edits::FieldCheck;
 use dioxus::prelude::*;
-use undercroft_core::forms::{
+use undercroft_engine::forms::{
     FieldError, FramingForm, Question, BRIDGING, END_RESTRAINTS, FINISHES, GRADES, MEMBER_KINDS,
     ROOM_USES, SIZES, SPECIES, SUPPORTS,
 };
-use undercroft_core::units::{bare_number_hint, UnitSystem};
+use undercroft_engine::units::{bare_number_hint, UnitSystem};
 
 /// A field changed: its name (as `FramingForm::set` takes it) and its new text.
 pub type FieldChange = (&'static str, String);

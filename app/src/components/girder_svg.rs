@@ -3,7 +3,7 @@
 //! ply joints dashed.
 
 use dioxus::prelude::*;
-use undercroft_core::report::GirderView;
+use undercroft_engine::views::GirderView;
 
 const W: f64 = 320.0;
 const H: f64 = 150.0;

@@ -2,7 +2,7 @@
 
 use super::StatusBadge;
 use dioxus::prelude::*;
-use undercroft_core::forms::LiveCheck;
+use undercroft_engine::forms::LiveCheck;
 
 #[component]
 pub fn LiveCard(check: LiveCheck) -> Element {

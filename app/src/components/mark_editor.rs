@@ -4,7 +4,7 @@
 
 use crate::use_app;
 use dioxus::prelude::*;
-use undercroft_core::model::{PhotoMark, Spot};
+use undercroft_engine::model::{PhotoMark, Spot};
 
 #[derive(Clone, Copy, PartialEq)]
 enum Tool {

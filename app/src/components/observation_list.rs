@@ -3,10 +3,10 @@
 
 use crate::Route;
 use dioxus::prelude::*;
-use undercroft_core::forms::{ObservationForm, KINDS};
-use undercroft_core::model::Observation;
-use undercroft_core::store::new_id;
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::{ObservationForm, KINDS};
+use undercroft_engine::model::Observation;
+use undercroft_engine::units::UnitSystem;
+use undercroft_store::new_id;
 
 #[component]
 pub fn ObservationList(

@@ -6,9 +6,9 @@
 
 use crate::use_app;
 use dioxus::prelude::*;
-use undercroft_core::report::count;
-use undercroft_core::store::{OfficeLink, Store};
-use undercroft_core::sync::Office;
+use undercroft_engine::words::count;
+use undercroft_store::{OfficeLink, Store};
+use undercroft_sync::Office;
 
 /// Sends and takes on a plain thread with its own connection to the store, and keeps how it
 /// went in the store.
@@ -140,7 +140,7 @@ pub fn OfficeSync() -> Element {
                 None => match last {
                     Some(last) => rsx! {
                         p { id: "office-last", class: if last.ok { "hint" } else { "field-error" },
-                            "Last sent {undercroft_core::store::local_time(&last.at)}: {last.text}"
+                            "Last sent {undercroft_store::local_time(&last.at)}: {last.text}"
                         }
                     },
                     None => rsx! {},

@@ -3,8 +3,8 @@
 
 use super::TapeInput;
 use dioxus::prelude::*;
-use undercroft_core::forms::{FieldError, PathField, PathFieldType};
-use undercroft_core::units::{bare_number_hint, UnitSystem};
+use undercroft_engine::forms::{FieldError, PathField, PathFieldType};
+use undercroft_engine::units::{bare_number_hint, UnitSystem};
 
 /// A field changed: its name and its new text.
 pub type PathChange = (&'static str, String);

@@ -11,7 +11,7 @@ use super::MarkEditor;
 use crate::use_app;
 use base64::Engine;
 use dioxus::prelude::*;
-use undercroft_core::store::RemovedPhoto;
+use undercroft_store::RemovedPhoto;
 
 /// The script that reads picked files and sends each back as `{name, size, data}`. Files
 /// picked before the script ran (the screen is drawn before its listener is wired, most of

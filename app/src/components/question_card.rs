@@ -2,7 +2,7 @@
 //! looks wrong, a button to keep the value, and the likely reading when one stands out.
 
 use dioxus::prelude::*;
-use undercroft_core::forms::Question;
+use undercroft_engine::forms::Question;
 
 #[component]
 pub fn QuestionCard(

@@ -3,7 +3,7 @@
 //! problems are without opening each.
 
 use dioxus::prelude::*;
-use undercroft_core::{Evaluation, Status};
+use undercroft_engine::{Evaluation, Status};
 
 /// How much a status asks of the reader: the larger, the sooner it is looked at.
 fn weight(status: Status) -> u8 {
@@ -50,8 +50,8 @@ mod tests {
     #[test]
     fn a_row_takes_the_worst_status_of_what_it_stands_for() {
         let demo =
-            undercroft_core::interchange::from_json(crate::startup::DEMO_INSPECTION).unwrap();
-        let evaluation = undercroft_core::evaluate(&demo);
+            undercroft_engine::interchange::from_json(crate::startup::DEMO_INSPECTION).unwrap();
+        let evaluation = undercroft_engine::evaluate(&demo);
         // The kitchen run is over its allowable span (the demo's 15' 2" against 14' 1").
         assert_eq!(
             worst_status(&evaluation, &["run-kitchen"]),

@@ -2,7 +2,7 @@
 //! so), supports, end zones and middle third, notches and holes where they sit.
 
 use dioxus::prelude::*;
-use undercroft_core::report::SideView;
+use undercroft_engine::views::SideView;
 
 const W: f64 = 300.0;
 const H: f64 = 130.0;

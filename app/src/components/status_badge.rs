@@ -2,7 +2,7 @@
 //! code limit" only for a code limit), with its use of the limit.
 
 use dioxus::prelude::*;
-use undercroft_core::Status;
+use undercroft_engine::Status;
 
 #[component]
 pub fn StatusBadge(status: Status, label: String, use_text: Option<String>) -> Element {

@@ -243,7 +243,7 @@ pub fn pressed(text: &str, key: &str) -> String {
 #[cfg(test)]
 mod tests {
     use super::pressed;
-    use undercroft_core::units::{parse_typed_length, UnitSystem};
+    use undercroft_engine::units::{parse_typed_length, UnitSystem};
 
     fn typed(keys: &[&str]) -> String {
         keys.iter().fold(String::new(), |text, k| pressed(&text, k))

@@ -6,10 +6,10 @@ use crate::components::{worst_status, AutosaveFields, PathChange, Photos, RowSta
 use crate::edits::save_area_field;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS};
-use undercroft_core::model::{Area, GirderKind, GirderLine, JoistRun, Member};
-use undercroft_core::store::new_id;
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::{field_text, site_with, FieldError, AREA_FIELDS, SITE_FIELDS};
+use undercroft_engine::model::{Area, GirderKind, GirderLine, JoistRun, Member};
+use undercroft_engine::units::UnitSystem;
+use undercroft_store::new_id;
 
 #[component]
 pub fn AreaView(id: String) -> Element {

@@ -2,9 +2,9 @@
 //! run, member, girder, post or area it is about.
 
 use crate::Route;
-use undercroft_core::forms::ObservationForm;
-use undercroft_core::model::{Inspection, Observation};
-use undercroft_core::Finding;
+use undercroft_engine::forms::ObservationForm;
+use undercroft_engine::model::{Inspection, Observation};
+use undercroft_engine::Finding;
 
 /// The screen to fix or look at what a finding is about.
 pub fn route_of(inspection: &Inspection, f: &Finding) -> Option<Route> {
@@ -67,11 +67,11 @@ mod tests {
 
     #[test]
     fn every_demo_finding_leads_somewhere() {
-        let i: Inspection = undercroft_core::interchange::from_json(include_str!(
+        let i: Inspection = undercroft_engine::interchange::from_json(include_str!(
             "../../../demo-data/demo-inspection.json"
         ))
         .unwrap();
-        let e = undercroft_core::evaluate(&i);
+        let e = undercroft_engine::evaluate(&i);
         for f in &e.findings {
             assert!(
                 route_of(&i, f).is_some(),

@@ -7,14 +7,14 @@ use super::findings_filter::{shown, StatusFilter};
 use crate::components::{PhotoMessage, PhotoOutcome, PhotoPicker, StatusBadge, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::priority::{default_priority, effective_priority, Priority};
-use undercroft_core::store::FindingNote;
+use undercroft_engine::model::FindingNote;
+use undercroft_engine::priority::{default_priority, effective_priority, Priority};
 
 /// One finding as the screen shows it.
 #[derive(Clone, PartialEq)]
 struct Row {
     key: String,
-    status: undercroft_core::Status,
+    status: undercroft_engine::Status,
     label: String,
     basis: String,
     use_text: Option<String>,
@@ -170,7 +170,7 @@ pub fn Findings(id: String) -> Element {
 }
 
 /// A row's status and area, for the filters.
-fn status_and_area(r: &Row) -> (undercroft_core::Status, &str) {
+fn status_and_area(r: &Row) -> (undercroft_engine::Status, &str) {
     (r.status, r.area_id.as_str())
 }
 

@@ -1,7 +1,7 @@
 //! Which findings the findings screen shows: a status filter in the inspector's words, an
 //! area, and the checks within their limits folded away until asked for.
 
-use undercroft_core::Status;
+use undercroft_engine::Status;
 
 /// The status filter's choices.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]

@@ -8,14 +8,14 @@ use crate::components::{
 };
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{
+use undercroft_engine::forms::{
     field_text, girder_with, post_position_problem, FieldError, GIRDER_FIELDS,
 };
-use undercroft_core::model::Post;
-use undercroft_core::report::girder_view_of;
-use undercroft_core::store::new_id;
-use undercroft_core::units::UnitSystem;
-use undercroft_core::units::{bare_number_hint, parse_typed_length};
+use undercroft_engine::model::Post;
+use undercroft_engine::units::UnitSystem;
+use undercroft_engine::units::{bare_number_hint, parse_typed_length};
+use undercroft_engine::views::girder_view_of;
+use undercroft_store::new_id;
 
 #[component]
 pub fn GirderScreen(id: String) -> Element {

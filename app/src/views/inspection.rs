@@ -4,10 +4,10 @@ use crate::components::{worst_status, AutosaveFields, PathChange, RowStatus, Top
 use crate::edits::save_header_field;
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{field_text, INSPECTION_FIELDS};
-use undercroft_core::model::{Area, AreaKind};
-use undercroft_core::store::new_id;
-use undercroft_core::Status;
+use undercroft_engine::forms::{field_text, INSPECTION_FIELDS};
+use undercroft_engine::model::{Area, AreaKind};
+use undercroft_engine::Status;
+use undercroft_store::new_id;
 
 #[component]
 pub fn InspectionView(id: String) -> Element {

@@ -2,8 +2,8 @@
 
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::model::RoomUse;
-use undercroft_core::store::{now_utc, ListFilter, NewInspection};
+use undercroft_engine::model::RoomUse;
+use undercroft_store::{now_utc, ListFilter, NewInspection};
 
 #[component]
 pub fn Inspections() -> Element {

@@ -7,8 +7,8 @@ use crate::components::{
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{live_check, place_key, FramingForm};
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::{live_check, place_key, FramingForm};
+use undercroft_engine::units::UnitSystem;
 
 #[component]
 pub fn MemberView(id: String) -> Element {

@@ -4,10 +4,10 @@
 use crate::components::{Photos, RemoveButton, SideViewSvg, StatusBadge, TapeInput, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{
+use undercroft_engine::forms::{
     fields_of, place_key, preview_observation, side_view_with, FieldType, ObservationForm, KINDS,
 };
-use undercroft_core::units::{bare_number_hint, UnitSystem};
+use undercroft_engine::units::{bare_number_hint, UnitSystem};
 
 #[component]
 pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
@@ -48,7 +48,7 @@ pub fn ObservationView(owner: String, kind: String, id: String) -> Element {
                     app.change(|s| s.add_observation(&owner_id, &observation))
                 };
                 if let Err(e) = result {
-                    errors.set(vec![undercroft_core::forms::FieldError {
+                    errors.set(vec![undercroft_engine::forms::FieldError {
                         field: "save",
                         message: e,
                     }]);

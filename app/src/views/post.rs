@@ -4,8 +4,8 @@
 use crate::components::{PathChange, PathFields, Photos, RemoveButton, StatusBadge, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{field_text, post_with, FieldError, POST_FIELDS};
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::{field_text, post_with, FieldError, POST_FIELDS};
+use undercroft_engine::units::UnitSystem;
 
 #[component]
 pub fn PostScreen(id: String) -> Element {

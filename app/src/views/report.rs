@@ -3,10 +3,10 @@
 use crate::components::{SharePdf, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::evaluate;
-use undercroft_core::report::readiness::before_handover;
-use undercroft_core::report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
-use undercroft_core::store::local_time;
+use undercroft_engine::evaluate;
+use undercroft_report::readiness::before_handover;
+use undercroft_report::{build_report, pdf, Paper, PhotoFiles, ReportInput};
+use undercroft_store::local_time;
 
 /// Lets the screen draw the progress line before the next step runs.
 async fn yield_now() {

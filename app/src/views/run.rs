@@ -8,10 +8,10 @@ use crate::components::{
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{first_place, live_check, place_key, FramingForm};
-use undercroft_core::model::Joist;
-use undercroft_core::store::new_id;
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::{first_place, live_check, place_key, FramingForm};
+use undercroft_engine::model::Joist;
+use undercroft_engine::units::UnitSystem;
+use undercroft_store::new_id;
 
 #[component]
 pub fn RunView(id: String) -> Element {

@@ -4,10 +4,10 @@
 use crate::components::{OfficeSync, TopBar};
 use crate::{use_app, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::CODE_EDITIONS;
-use undercroft_core::model::RoomUse;
-use undercroft_core::store::{Screen, Settings};
-use undercroft_core::units::UnitSystem;
+use undercroft_engine::forms::CODE_EDITIONS;
+use undercroft_engine::model::RoomUse;
+use undercroft_engine::units::UnitSystem;
+use undercroft_store::{Screen, Settings};
 
 #[component]
 pub fn SettingsView() -> Element {

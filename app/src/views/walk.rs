@@ -9,13 +9,13 @@ use crate::components::{
 use crate::edits::{FieldCheck, FramingEdit, FramingOwner};
 use crate::{use_app, AppState, Route};
 use dioxus::prelude::*;
-use undercroft_core::forms::{
+use undercroft_engine::forms::{
     joist_at, live_check, place_from_key, place_key, previous_joist, walk_label, walk_step,
     FramingForm,
 };
-use undercroft_core::model::{Framing, Joist, JoistRun};
-use undercroft_core::store::new_id;
-use undercroft_core::units::{format_length, format_spacing, Length, UnitSystem};
+use undercroft_engine::model::{Framing, Joist, JoistRun};
+use undercroft_engine::units::{format_length, format_spacing, Length, UnitSystem};
+use undercroft_store::new_id;
 
 /// The fields that change joist to joist along a run; the rest are the run's.
 const WALKED_FIELDS: &[&str] = &["size", "clear_span", "bearing_length", "bearing_on"];

@@ -126,7 +126,7 @@ pub async fn show(
         esc(&view.inspector),
         esc(&view.code_edition),
         view.photos,
-        esc(undercroft_core::SCREENING_NOTICE),
+        esc(undercroft_engine::SCREENING_NOTICE),
         open,
         view.findings.len(),
     );

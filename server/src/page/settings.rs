@@ -11,7 +11,7 @@ use axum::response::{Html, IntoResponse, Response};
 use axum::Form;
 use serde::Deserialize;
 use std::sync::Arc;
-use undercroft_core::sync::{CountyRule, FirmSettings, LicenseEntry};
+use undercroft_sync::{CountyRule, FirmSettings, LicenseEntry};
 
 #[derive(Deserialize, Default, Clone)]
 #[serde(default)]
@@ -51,7 +51,7 @@ fn as_form(firm: &FirmSettings) -> SettingsForm {
 fn render(caller: &Caller, form: &SettingsForm, message: Option<(&str, bool)>) -> Html<String> {
     let editions: String = std::iter::once("")
         .chain(
-            undercroft_core::forms::CODE_EDITIONS
+            undercroft_engine::forms::CODE_EDITIONS
                 .iter()
                 .map(|(k, _)| *k),
         )

@@ -5,11 +5,11 @@
 
 use std::path::{Path, PathBuf};
 use std::sync::Arc;
-use undercroft_core::store::Store;
 use undercroft_server::auth::Role;
 use undercroft_server::pg_cluster::{test_database, TestDatabase};
 pub use undercroft_server::synthetic::{photo, synthetic_push, tiny_pdf};
 use undercroft_server::Office;
+use undercroft_store::Store;
 
 pub struct Running {
     pub url: String,
@@ -50,7 +50,7 @@ pub fn temp_dir(name: &str) -> PathBuf {
     let dir = std::env::temp_dir().join(format!(
         "undercroft-server-test-{name}-{}-{}",
         std::process::id(),
-        undercroft_core::store::new_id()
+        undercroft_store::new_id()
     ));
     std::fs::create_dir_all(&dir).unwrap();
     dir
@@ -150,7 +150,7 @@ pub fn device_with_demo(dir: &Path) -> (Store, String) {
     let mut store = Store::open(&dir.join("device.sqlite")).unwrap();
     let demo_text =
         std::fs::read_to_string(repo_root().join("demo-data/demo-inspection.json")).unwrap();
-    let demo = undercroft_core::interchange::from_json(&demo_text).unwrap();
+    let demo = undercroft_engine::interchange::from_json(&demo_text).unwrap();
     let images = demo
         .photos
         .iter()
@@ -179,17 +179,13 @@ pub fn device_with_demo(dir: &Path) -> (Store, String) {
 /// (at most `tries` attempts, 100 ms apart); returns the answer, the last attempt's time and
 /// the attempts made. Any other refusal fails the test.
 pub fn push_until_acknowledged(
-    device: &undercroft_core::sync::Office,
+    device: &undercroft_sync::Office,
     id: &str,
-    request: &undercroft_core::sync::PushRequest,
+    request: &undercroft_sync::PushRequest,
     files: &std::collections::HashMap<String, Vec<u8>>,
     tries: usize,
-) -> (
-    undercroft_core::sync::PushAnswer,
-    std::time::Duration,
-    usize,
-) {
-    use undercroft_core::sync::OfficeError;
+) -> (undercroft_sync::PushAnswer, std::time::Duration, usize) {
+    use undercroft_sync::OfficeError;
     for attempt in 1..=tries {
         let started = std::time::Instant::now();
         match device.push_revision(id, request, |sha| Ok(files[sha].clone())) {
@@ -217,7 +213,7 @@ pub fn every_revisions_files_present(server: &Running) -> usize {
     for sha in &hashes {
         let path = server.files.join(&sha[..2]).join(sha);
         let bytes = std::fs::read(&path).unwrap_or_else(|e| panic!("{}: {e}", path.display()));
-        assert_eq!(&undercroft_core::store::content_hash(&bytes), sha);
+        assert_eq!(&undercroft_store::content_hash(&bytes), sha);
     }
     hashes.len()
 }
