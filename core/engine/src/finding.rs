@@ -386,34 +386,51 @@ pub trait Wording {
 pub trait Detail: Wording + Any + Debug + Send + Sync {
     /// Whether `other` is a detail of the same type with the same numbers.
     fn same_as(&self, other: &dyn Detail) -> bool;
+    /// A copy, kept as a finding keeps it.
+    fn kept_copy(&self) -> KeptDetail;
 }
 
-impl<T: Wording + PartialEq + Debug + Send + Sync + 'static> Detail for T {
+impl<T: Wording + Clone + PartialEq + Debug + Send + Sync + 'static> Detail for T {
     fn same_as(&self, other: &dyn Detail) -> bool {
         (other as &dyn Any).downcast_ref::<T>() == Some(self)
     }
-}
 
-/// A finding's detail as kept: cheap to clone, compared by value, read as a `Detail`.
-#[derive(Debug, Clone)]
-pub struct SharedDetail(Arc<dyn Detail>);
-
-impl SharedDetail {
-    pub fn new(detail: impl Detail) -> Self {
-        SharedDetail(Arc::new(detail))
+    fn kept_copy(&self) -> KeptDetail {
+        KeptDetail::new(self.clone())
     }
 }
 
-impl std::ops::Deref for SharedDetail {
+/// Room for a detail kept inside the finding, in machine words: every rule's detail fits but
+/// the longest (a span's options, a bearing), which go to the heap. Keeping them inline spares
+/// an allocation per finding (`cargo bench -p undercroft-engine --bench evaluate`).
+type DetailRoom = smallbox::space::S8;
+
+/// A finding's detail as kept: compared by value, read as a `Detail`.
+#[derive(Debug)]
+pub struct KeptDetail(smallbox::SmallBox<dyn Detail, DetailRoom>);
+
+impl KeptDetail {
+    pub fn new(detail: impl Detail) -> Self {
+        KeptDetail(smallbox::smallbox!(detail))
+    }
+}
+
+impl Clone for KeptDetail {
+    fn clone(&self) -> Self {
+        self.0.kept_copy()
+    }
+}
+
+impl std::ops::Deref for KeptDetail {
     type Target = dyn Detail;
     fn deref(&self) -> &(dyn Detail + 'static) {
-        self.0.as_ref()
+        &*self.0
     }
 }
 
-impl PartialEq for SharedDetail {
+impl PartialEq for KeptDetail {
     fn eq(&self, other: &Self) -> bool {
-        self.0.same_as(other.0.as_ref())
+        self.0.same_as(&*other.0)
     }
 }
 
@@ -447,7 +464,7 @@ pub struct Finding {
     pub governing: Option<usize>,
     pub not_checked_because: Option<Text>,
     /// The numbers the wording is written from, of the rule's own type.
-    pub detail: SharedDetail,
+    pub detail: KeptDetail,
     pub units: UnitSystem,
     pub edition: Arc<str>,
     /// The year the house was built, where known.
@@ -613,6 +630,11 @@ pub struct FindingBuilder {
 impl FindingBuilder {
     /// A finding placed by the caller (a member, a girder line, a post, an area).
     pub fn at(rule: &'static RuleInfo, place: Place, common: &Common) -> Self {
+        FindingBuilder::sharing(rule, place, common.clone())
+    }
+
+    /// As `at`, taking the shared values themselves.
+    pub fn sharing(rule: &'static RuleInfo, place: Place, common: Common) -> Self {
         FindingBuilder {
             rule,
             basis: rule.basis,
@@ -620,7 +642,7 @@ impl FindingBuilder {
             observation_id: None,
             part: None,
             checks: Vec::new(),
-            common: common.clone(),
+            common,
         }
     }
 
@@ -659,7 +681,7 @@ impl FindingBuilder {
             checks: self.checks,
             governing: None,
             not_checked_because: None,
-            detail: SharedDetail::new(detail),
+            detail: KeptDetail::new(detail),
             units: self.common.units,
             edition: self.common.edition,
             year_built: self.common.year_built,
@@ -785,6 +807,49 @@ mod tests {
             .unwrap()
             .contains("benchmark"));
         assert_eq!(edition_year("IRC 2021"), Some(2021));
+    }
+
+    #[test]
+    fn a_kept_detail_clones_compares_and_is_found_by_its_type() {
+        #[derive(Debug, Clone, PartialEq)]
+        struct Wide([f64; 40]);
+        impl Wording for Wide {
+            fn summary(&self, _: UnitSystem) -> String {
+                format!("{}", self.0[39])
+            }
+            fn recommendation(&self, _: Status, _: UnitSystem) -> String {
+                String::new()
+            }
+        }
+        let missing = KeptDetail::new(Missing("Measure it."));
+        let wide = KeptDetail::new(Wide([2.5; 40]));
+        // Small details are kept inline, wide ones on the heap: both clone to an equal copy.
+        assert_eq!(missing.clone(), missing);
+        assert_eq!(wide.clone(), wide);
+        assert_eq!(wide.clone().summary(UnitSystem::Imperial), "2.5");
+        assert_ne!(missing, wide);
+        assert_ne!(KeptDetail::new(Missing("Other.")), missing);
+        let rule = &RuleInfo {
+            id: "x",
+            title: "X",
+            code_section: Some("R502.8.1"),
+            other_source: None,
+            basis: Basis::CodeLimit,
+        };
+        let common = Common {
+            units: UnitSystem::Imperial,
+            edition: "IRC 2018".into(),
+            year_built: None,
+        };
+        let place = Place {
+            area_id: "a".into(),
+            member_id: "m".into(),
+            location: "Crawlspace".into(),
+        };
+        let finding = FindingBuilder::at(rule, place, &common).not_checked("why", Wide([1.0; 40]));
+        assert_eq!(finding.detail_as::<Wide>().map(|w| w.0[0]), Some(1.0));
+        assert!(finding.detail_as::<Missing>().is_none());
+        assert_eq!(finding.clone(), finding);
     }
 
     #[test]

@@ -149,7 +149,7 @@ impl MemberContext<'_> {
             edition: self.edition.clone(),
             year_built: self.year_built,
         };
-        FindingBuilder::at(rule, self.place.clone(), &common).observation(observation_id)
+        FindingBuilder::sharing(rule, self.place.clone(), common).observation(observation_id)
     }
 
     /// Wet service: a reading above 19 %, or exterior (porch or deck) framing.

@@ -3,9 +3,8 @@
 //! against crushing across the grain (NDS 2018 3.10.2).
 
 use super::context::{GirderContext, Support};
-use crate::finding::Missing;
 use crate::finding::{
-    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+    Basis, Bound, Check, Finding, FindingBuilder, Missing, RuleInfo, Status, Value, Wording,
 };
 use crate::model::{BearingSupport, GirderKind, PostMaterial};
 use crate::rules::shared::dim;

@@ -4,9 +4,8 @@
 //! a floor girder carrying joists only.
 
 use super::context::{GirderContext, GirderLumber, LineLoad};
-use crate::finding::Missing;
 use crate::finding::{
-    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+    Basis, Bound, Check, Finding, FindingBuilder, Missing, RuleInfo, Status, Value, Wording,
 };
 use crate::lumber::LoadDuration;
 use crate::mechanics::{check_beam, BeamInput};

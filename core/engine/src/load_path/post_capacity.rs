@@ -2,9 +2,8 @@
 //! held to 50, the factor Cp), against the load the girder spans on each side bring to it.
 
 use super::context::{GirderContext, Support};
-use crate::finding::Missing;
 use crate::finding::{
-    Basis, Bound, Check, Finding, FindingBuilder, RuleInfo, Status, Value, Wording,
+    Basis, Bound, Check, Finding, FindingBuilder, Missing, RuleInfo, Status, Value, Wording,
 };
 use crate::lumber::LoadDuration;
 use crate::mechanics::{post_capacity, PostCapacity, PostInput, MAX_SLENDERNESS};

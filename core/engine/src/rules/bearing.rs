@@ -3,8 +3,7 @@
 //! requires for the computed reaction (NDS 3.10.2) beside it.
 
 use super::shared::{dim, dim_min, Ends};
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::model::{Bearing, BearingSupport, End, ObservationKind};
 use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;

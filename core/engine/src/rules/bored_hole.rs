@@ -2,8 +2,7 @@
 //! other holes and from notches.
 
 use super::shared::{dim, dim_max, dim_min, len};
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::geometry::{circle_to_circle, circle_to_rect, hole_circle, notch_rect};
 use crate::model::ObservationKind;
 use crate::units::{Length, UnitSystem};

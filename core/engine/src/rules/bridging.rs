@@ -2,8 +2,7 @@
 //! (IRC R502.7.1).
 
 use super::shared::len;
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::lumber::NominalSize;
 use crate::model::BridgingKind;
 use crate::units::{Length, UnitSystem};

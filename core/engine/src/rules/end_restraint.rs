@@ -1,8 +1,7 @@
 //! End restraint of joists against rotation (IRC R502.7).
 
 use super::shared::Ends;
-use crate::finding::Missing;
-use crate::finding::{Basis, Check, Finding, RuleInfo, Status, Wording};
+use crate::finding::{Basis, Check, Finding, Missing, RuleInfo, Status, Wording};
 use crate::model::{EndRestraint, MemberKind, ObservationKind};
 use crate::units::UnitSystem;
 use crate::validate::MemberContext;

@@ -2,8 +2,7 @@
 //! mechanics), with dry or wet service.
 
 use super::shared::{dim, len, load_lines, LumberNotes};
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::lumber::{GradeChoice, NominalSize, Species};
 use crate::mechanics::Governing;
 use crate::model::{MemberKind, ResolvedLoads};

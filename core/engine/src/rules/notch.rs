@@ -2,8 +2,7 @@
 //! and the tension side of members 4 in nominal or thicker.
 
 use super::shared::{dim, dim_max, len};
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::geometry::{middle_third, notch_rect};
 use crate::model::{Edge, ObservationKind};
 use crate::units::{Length, UnitSystem};

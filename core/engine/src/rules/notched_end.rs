@@ -2,8 +2,7 @@
 //! engineering reference beside the code's d/4 end-notch limit, which mechanics may not allow.
 
 use super::shared::dim;
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::model::{Edge, ObservationKind};
 use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;

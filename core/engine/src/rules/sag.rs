@@ -2,8 +2,7 @@
 //! IRC Table R301.7, worded for what it is: a reference, not a limit on long-term sag.
 
 use super::shared::{dim, dim_max, len};
-use crate::finding::Missing;
-use crate::finding::{Basis, Bound, Check, Finding, RuleInfo, Status, Value, Wording};
+use crate::finding::{Basis, Bound, Check, Finding, Missing, RuleInfo, Status, Value, Wording};
 use crate::model::{ObservationKind, SagReading};
 use crate::units::{Length, UnitSystem};
 use crate::validate::MemberContext;
