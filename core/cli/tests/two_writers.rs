@@ -39,6 +39,38 @@ fn failures(outputs: Vec<Output>) -> Vec<String> {
 }
 
 #[test]
+fn processes_that_open_a_new_store_at_once_all_see_it_as_ours() {
+    // One process makes the store's tables while the others look at the file: each must see
+    // it before or after, never half made (it was once refused as another program's).
+    let t = Temp::new("new-store-race");
+    for round in 0..150 {
+        let db =
+            t.0.join(format!("store-{round}.sqlite"))
+                .display()
+                .to_string();
+        let runs: Vec<_> = (0..4)
+            .map(|k| {
+                let db = db.clone();
+                std::thread::spawn(move || {
+                    let address = format!("{k} Elm Street");
+                    undercroft(&db, &["new", "--address", &address, "--date", "2026-01-01"])
+                })
+            })
+            .collect();
+        let failed = failures(runs.into_iter().map(|r| r.join().unwrap()).collect());
+        assert!(failed.is_empty(), "round {round}: {failed:?}");
+        assert_eq!(
+            Store::open(Path::new(&db))
+                .unwrap()
+                .list_inspections(&Default::default())
+                .unwrap()
+                .len(),
+            4
+        );
+    }
+}
+
+#[test]
 fn two_importers_take_turns() {
     let t = Temp::new("two-import");
     let db = t.0.join("store.sqlite").display().to_string();

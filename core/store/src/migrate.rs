@@ -50,8 +50,12 @@ pub const APPLICATION_ID: i64 = 1_431_192_643;
 
 /// Refuses a database that is not a store of ours: one with tables but no schema version
 /// (another program's), one with another program's application id, or one whose version
-/// says it is ours but has no inspections table. Reads only.
+/// says it is ours but has no inspections table. Reads only, from one snapshot: a store that
+/// another process is creating at this moment is seen before or after, never half made (its
+/// tables without its version).
 pub fn check_ours(conn: &Connection) -> std::result::Result<(), String> {
+    let snapshot = conn.unchecked_transaction().map_err(|e| e.to_string())?;
+    let conn = &*snapshot;
     let version: i64 = conn
         .query_row("PRAGMA user_version", [], |r| r.get(0))
         .map_err(|e| e.to_string())?;
