@@ -23,13 +23,7 @@ pub struct PreparedPhoto {
 
 /// Hashes and imports a photo (decode, resize, orient, encode) without touching the store.
 pub fn prepare_photo(bytes: &[u8]) -> Result<PreparedPhoto> {
-    let format = sniff(bytes).map_err(|e| {
-        if bytes.is_empty() {
-            photo::PhotoError::Empty
-        } else {
-            e
-        }
-    })?;
+    let format = sniffed(bytes)?;
     // The hash (about 10 ms for a 4 MB photo) runs beside the decode.
     let (hash, processed) = std::thread::scope(|s| {
         let hash = s.spawn(|| content_hash(bytes));
@@ -41,6 +35,17 @@ pub fn prepare_photo(bytes: &[u8]) -> Result<PreparedPhoto> {
         format,
         processed: Some(processed?),
     })
+}
+
+/// The photo's format, or why it is refused (an empty file said as such).
+fn sniffed(bytes: &[u8]) -> Result<photo::SourceFormat> {
+    Ok(sniff(bytes).map_err(|e| {
+        if bytes.is_empty() {
+            photo::PhotoError::Empty
+        } else {
+            e
+        }
+    })?)
 }
 
 /// A stored photo with where its files are.
@@ -69,31 +74,50 @@ impl Store {
         caption: &str,
     ) -> Result<PhotoRef> {
         let inspection_id = self.check_owner(attached_to)?;
-        sniff(bytes)?;
-        // The original is written and synced while the photo is hashed and decoded; it gets
-        // its name (the hash) once that is known.
+        let format = sniffed(bytes)?;
+        // The hash comes first (a few ms): a photo the store already holds is not decoded
+        // and resized again, its stored images serve.
+        let hash = content_hash(bytes);
+        if self.existing_size(&hash)?.is_some() {
+            let prepared = PreparedPhoto {
+                hash,
+                format,
+                processed: None,
+            };
+            return self.store_prepared(
+                &inspection_id,
+                attached_to,
+                bytes,
+                &prepared,
+                caption,
+                None,
+            );
+        }
+        // A new photo: the original is written and synced while it is decoded; it gets its
+        // name (the hash) when the row is written.
         let files = &self.photos;
         let keep = self.keep_originals == KeepOriginals::Yes;
-        let (staged, prepared) = std::thread::scope(|s| {
+        let (staged, processed) = std::thread::scope(|s| {
             let staged = keep.then(|| s.spawn(|| files.stage(Kind::Original, bytes)));
-            let prepared = prepare_photo(bytes);
+            let processed = photo::process(bytes);
             let staged = staged.map(|t| t.join().expect("a file write does not panic"));
-            (staged, prepared)
+            (staged, processed)
         });
         let staged = staged.transpose()?;
-        let mut prepared = match prepared {
+        let processed = match processed {
             Ok(p) => p,
             Err(e) => {
                 if let Some(staged) = staged {
                     staged.discard();
                 }
-                return Err(e);
+                return Err(e.into());
             }
         };
-        if self.existing_size(&prepared.hash)?.is_some() {
-            // The same photo is already here, made from its verified original.
-            prepared.processed = None;
-        }
+        let prepared = PreparedPhoto {
+            hash,
+            format,
+            processed: Some(processed),
+        };
         self.store_prepared(
             &inspection_id,
             attached_to,

@@ -435,6 +435,34 @@ fn photos_are_stored_once_ordered_and_swept() {
 }
 
 #[test]
+fn a_photo_already_stored_is_found_by_its_hash_and_made_again_when_its_images_are_gone() {
+    let t = Temp::new("photo-again");
+    let mut store = Store::open(&t.db()).unwrap();
+    store.import_inspection(&demo()).unwrap();
+    let jpeg = camera_jpeg(&upright_scene(1200, 900), 6);
+    store.add_photo("obs-k7-notch", &jpeg, "first").unwrap();
+    let first = store.photos_of("obs-k7-notch").unwrap().remove(0);
+    let report = first.report_path.clone().unwrap();
+    let made = std::fs::read(&report).unwrap();
+    assert!(first.width.is_some() && first.height.is_some());
+    // Again: the stored images serve, with their size.
+    store.add_photo("area-crawl", &jpeg, "again").unwrap();
+    let again = store.photos_of("area-crawl").unwrap().remove(0);
+    assert_eq!(
+        (again.hash.as_ref(), again.width, again.height),
+        (first.hash.as_ref(), first.width, first.height)
+    );
+    assert_eq!(files_in(store.photo_dir()), 3, "one set of files");
+    // With its report image gone, the photo is made again from its bytes.
+    std::fs::remove_file(&report).unwrap();
+    store.add_photo("area-crawl", &jpeg, "third").unwrap();
+    assert_eq!(std::fs::read(&report).unwrap(), made);
+    // An empty file is said to be empty.
+    let empty = store.add_photo("area-crawl", b"", "nothing").unwrap_err();
+    assert!(empty.to_string().contains("empty"), "{empty}");
+}
+
+#[test]
 fn bad_photos_store_nothing() {
     let t = Temp::new("badphotos");
     let mut store = Store::open(&t.db()).unwrap();
