@@ -3,7 +3,7 @@
 //! `FindingBuilder`; the numbers are set when the rule runs, the wording is written from them
 //! when it is read (`summary`, `assumptions`, `recommendation`), so evaluating stays cheap.
 //! A finding knows no rule: each rule owns its detail type and words it (`Wording`), and the
-//! finding keeps it as a `Detail`.
+//! finding keeps it as a `KeptDetail`.
 
 use crate::units::{format_dimension, format_length, round_down, round_up, Length, UnitSystem};
 use serde::ser::SerializeStruct;
@@ -400,9 +400,9 @@ impl<T: Wording + Clone + PartialEq + Debug + Send + Sync + 'static> Detail for 
     }
 }
 
-/// Room for a detail kept inside the finding, in machine words: every rule's detail fits but
-/// the longest (a span's options, a bearing), which go to the heap. Keeping them inline spares
-/// an allocation per finding (`cargo bench -p undercroft-engine --bench evaluate`).
+/// Room for a detail kept inside the finding, in machine words: a detail that fits is kept
+/// inline, a wider one on the heap. Most rules' details fit, which spares an allocation per
+/// finding (`cargo bench -p undercroft-engine --bench evaluate`).
 type DetailRoom = smallbox::space::S8;
 
 /// A finding's detail as kept: compared by value, read as a `Detail`.
@@ -633,8 +633,8 @@ impl FindingBuilder {
         FindingBuilder::sharing(rule, place, common.clone())
     }
 
-    /// As `at`, taking the shared values themselves.
-    pub fn sharing(rule: &'static RuleInfo, place: Place, common: Common) -> Self {
+    /// As `at`, taking the shared values themselves (a member's, made for this finding).
+    pub(crate) fn sharing(rule: &'static RuleInfo, place: Place, common: Common) -> Self {
         FindingBuilder {
             rule,
             basis: rule.basis,

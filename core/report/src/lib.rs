@@ -14,6 +14,5 @@ mod wording;
 
 pub use build::{build_report, PhotoFiles, ReportInput};
 pub use model::*;
-pub use undercroft_engine::views::{
-    GirderView, SideView, SpanMark, SupportMark, ViewCircle, ViewRect,
-};
+// The drawings of the report model are the engine's geometry.
+pub use undercroft_engine::views::{GirderView, SideView};
